@@ -1,0 +1,41 @@
+// Every calculator the app offers, in home-screen order. Screens load lazily so the
+// start bundle stays small; each feature folder owns its Screen.tsx.
+import type { ComponentType } from 'preact';
+
+export type FeatureGroup = 'fiber' | 'loss' | 'link' | 'library';
+
+export interface FeatureEntry {
+  /** Route segment: the screen lives at #/<id>. */
+  id: string;
+  title: string;
+  /** One line on the home screen: the question it answers. */
+  summary: string;
+  group: FeatureGroup;
+  load: () => Promise<{ default: ComponentType }>;
+}
+
+export const GROUP_TITLES: Record<FeatureGroup, string> = {
+  fiber: 'The fiber itself',
+  loss: 'Joints, bends and launches',
+  link: 'The whole link',
+  library: 'Your fiber types',
+};
+
+export const FEATURES: FeatureEntry[] = [
+  { id: 'single-mode', group: 'fiber', title: 'Single-mode check', summary: 'Is this fiber single-mode at this wavelength? V-number and guided LP modes.', load: () => import('./singleMode/Screen') },
+  { id: 'mode-field', group: 'fiber', title: 'Mode field diameter', summary: 'MFD at any wavelength: Petermann II, Gaussian fit and Marcuse formula.', load: () => import('./modeField/Screen') },
+  { id: 'label-check', group: 'fiber', title: 'Check a label', summary: 'From cutoff and MFD on the label to a verdict at the system wavelength.', load: () => import('./labelCheck/Screen') },
+  { id: 'joint-loss', group: 'loss', title: 'Joint loss', summary: 'Splice or connector: MFD mismatch, offset, tilt and end gap.', load: () => import('./jointLoss/Screen') },
+  { id: 'otdr-splice', group: 'loss', title: 'OTDR splice reading', summary: 'Why one direction shows a gain, and the true splice loss.', load: () => import('./otdrSplice/Screen') },
+  { id: 'bend-loss', group: 'loss', title: 'Bend loss', summary: 'What a tight loop in a tray costs, per turn and for N turns.', load: () => import('./bendLoss/Screen') },
+  { id: 'launch', group: 'loss', title: 'Single-mode ⇄ multimode launch', summary: 'Power coupled into each mode, and the loss each way.', load: () => import('./launch/Screen') },
+  { id: 'link-budget', group: 'link', title: 'Link loss budget', summary: 'Fiber, connectors, splices and splitters against the equipment limits.', load: () => import('./linkBudget/Screen') },
+  { id: 'dispersion', group: 'link', title: 'Chromatic dispersion', summary: 'D(λ), zero-dispersion wavelength, and the reach for a bit rate.', load: () => import('./dispersion/Screen') },
+  { id: 'power', group: 'link', title: 'Optical power', summary: 'dBm ⇄ mW ⇄ µW and power after a chain of losses.', load: () => import('./power/Screen') },
+  { id: 'laser-safety', group: 'link', title: 'Laser safety', summary: 'Cautions and the indicative hazard context for a wavelength and power.', load: () => import('./safety/Screen') },
+  { id: 'library', group: 'library', title: 'Fiber types', summary: 'Save, edit, back up and restore the fiber types you meet.', load: () => import('./library/Screen') },
+];
+
+export function findFeature(id: string): FeatureEntry | undefined {
+  return FEATURES.find((f) => f.id === id);
+}

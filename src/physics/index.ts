@@ -1,0 +1,4 @@
+// The one public door of the physics engine. Pure TypeScript, no DOM.
+// Each module below is one concept; see DEVELOPERS.md and REFERENCES.md.
+export * from './errors';
+export * from './units';

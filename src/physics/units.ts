@@ -1,0 +1,104 @@
+// Unit parsing and conversion at the edges (UI, import). Formulas never convert inside.
+import { InputError } from './errors';
+
+/** Quantities a person types into a field, each with the base unit formulas use. */
+export type QuantityKind = 'wavelength' | 'length' | 'radius' | 'size' | 'power' | 'ratio' | 'plain';
+
+export const BASE_UNIT: Record<QuantityKind, string> = {
+  wavelength: 'nm',
+  length: 'km',
+  radius: 'mm',
+  size: 'µm',
+  power: 'dBm',
+  ratio: '',
+  plain: '',
+};
+
+/** Factor from each accepted unit to the base unit of its kind. Power is handled apart (log scale). */
+const UNIT_FACTORS: Record<Exclude<QuantityKind, 'power'>, Record<string, number>> = {
+  wavelength: { nm: 1, 'µm': 1000, um: 1000, 'μm': 1000, micron: 1000 },
+  length: { km: 1, m: 1e-3, mm: 1e-6 },
+  radius: { mm: 1, cm: 10, m: 1000, 'µm': 1e-3, um: 1e-3, 'μm': 1e-3 },
+  size: { 'µm': 1, um: 1, 'μm': 1, nm: 1e-3, mm: 1000 },
+  ratio: { '': 1, '%': 0.01 },
+  plain: { '': 1 },
+};
+
+export interface ParsedQuantity {
+  /** The value in the base unit of its kind. */
+  value: number;
+  /** The unit the person typed ('' when none: the base unit was assumed). */
+  typedUnit: string;
+  /** Plain-words note on the conversion, e.g. "1.55 µm = 1550 nm"; empty when none. */
+  conversion: string;
+}
+
+/** Longest text a field accepts; anything longer is refused before parsing. */
+export const MAX_FIELD_CHARS = 64;
+
+const NUMBER_RE = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?)\s*(.*)$/i;
+
+/**
+ * Parses what a person typed: "1550", "1,55 µm", "2.5 km", "-3 dBm", "0.5 mW".
+ * A decimal comma is accepted when it is the only separator (common practice in much of Europe).
+ * Throws InputError naming `argument` for anything that is not one finite number with a known unit.
+ */
+export function parseQuantity(argument: string, text: string, kind: QuantityKind): ParsedQuantity {
+  const raw = typeof text === 'string' ? text : '';
+  if (raw.length > MAX_FIELD_CHARS) {
+    throw new InputError(argument, raw, `a number of at most ${MAX_FIELD_CHARS} characters`, 'the text is far too long for a number');
+  }
+  let s = raw.trim().replace(/\u00a0/g, ' ');
+  if (s === '') throw new InputError(argument, raw, 'a number', 'the field is empty');
+  // "1,55" → "1.55" only when there is exactly one comma and no point: "1,2,3" stays invalid.
+  if (/^[^.]*,[^,]*$/.test(s) && (s.match(/,/g)?.length ?? 0) === 1) s = s.replace(',', '.');
+  const m = NUMBER_RE.exec(s);
+  if (!m) throw new InputError(argument, raw, 'a number such as 1550 or 1,55 µm', 'only digits, one decimal point or comma, and a unit');
+  const num = Number(m[1]);
+  const unitRaw = (m[2] ?? '').trim();
+  if (!Number.isFinite(num)) throw new InputError(argument, raw, 'a finite number', 'the number is too large');
+  // "-0" is read as 0: a signed zero has no physical meaning in any field.
+  const numSigned = Object.is(num, -0) ? 0 : num;
+
+  if (kind === 'power') return parsePower(argument, raw, numSigned, unitRaw);
+
+  const table = UNIT_FACTORS[kind];
+  const unitKey = lookupUnit(table, unitRaw);
+  if (unitKey === undefined) {
+    const known = Object.keys(table).filter((k) => k !== '' && k !== 'um' && k !== 'μm').join(', ');
+    throw new InputError(argument, raw, `a number${known ? ` with unit ${known}` : ''}`, `unknown unit "${unitRaw}"`);
+  }
+  const factor = table[unitKey]!;
+  const value = numSigned * factor;
+  const base = BASE_UNIT[kind];
+  const conversion = unitKey !== '' && factor !== 1 ? `${formatPlain(numSigned)} ${unitKey} = ${formatPlain(value)} ${base}` : '';
+  return { value, typedUnit: unitKey, conversion };
+}
+
+function lookupUnit(table: Record<string, number>, unit: string): string | undefined {
+  // No unit typed: the base unit of the kind (the key whose factor is 1) is assumed.
+  if (unit === '') return Object.keys(table).find((k) => table[k] === 1);
+  if (unit in table) return unit;
+  const lower = unit.toLowerCase();
+  return Object.keys(table).find((k) => k.toLowerCase() === lower);
+}
+
+function parsePower(argument: string, raw: string, num: number, unit: string): ParsedQuantity {
+  const u = unit.toLowerCase().replace('μ', 'µ');
+  if (u === '' || u === 'dbm') return { value: num, typedUnit: u === '' ? '' : 'dBm', conversion: '' };
+  const mwFactor: Record<string, number> = { mw: 1, 'µw': 1e-3, uw: 1e-3, nw: 1e-6, w: 1000 };
+  const f = mwFactor[u];
+  if (f === undefined) throw new InputError(argument, raw, 'a power in dBm, mW, µW, nW or W', `unknown unit "${unit}"`);
+  const mw = num * f;
+  if (!(mw > 0)) throw new InputError(argument, raw, 'a power greater than 0 in mW, µW, nW or W', 'a linear power must be positive to have a dBm value');
+  const dbm = 10 * Math.log10(mw);
+  return { value: dbm, typedUnit: unit, conversion: `${formatPlain(num)} ${unit} = ${formatPlain(dbm)} dBm` };
+}
+
+/** Plain formatting for conversion notes: up to 6 significant digits, no exponent for ordinary values. */
+export function formatPlain(v: number): string {
+  if (v === 0) return '0';
+  const a = Math.abs(v);
+  if (a >= 1e-4 && a < 1e9) return String(Number(v.toPrecision(6)));
+  return v.toExponential(4);
+}
