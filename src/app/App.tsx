@@ -3,6 +3,8 @@ import { useEffect, useMemo, useRef } from 'preact/hooks';
 import { FEATURES, findFeature, GROUP_TITLES, type FeatureGroup } from '../features/registry';
 import { hrefFor, useRoute } from './route';
 import { SafetyReminder } from '../ui/SafetyNotice';
+import { ThemeSwitch } from '../ui/ThemeSwitch';
+import { APP_BUILD, APP_VERSION } from './version';
 
 const screens = new Map(FEATURES.map((f) => [f.id, lazy(f.load)]));
 
@@ -19,7 +21,8 @@ export function App() {
     <div class="frame">
       <header class="topbar">
         <a class="brand" href={hrefFor('')}>Modewright</a>
-        {feature && <span class="topbar-title">{feature.title}</span>}
+        {feature ? <span class="topbar-title">{feature.title}</span> : <span class="spacer" />}
+        <ThemeSwitch />
       </header>
       <SafetyReminder />
       <main id="main" ref={main} tabIndex={-1} class="main">
@@ -32,6 +35,9 @@ export function App() {
           <Home unknown={route !== '' && !feature ? route : undefined} />
         )}
       </main>
+      <footer class="footer note">
+        Modewright {APP_VERSION} · build <span data-build-id>{APP_BUILD}</span> · works offline once loaded · no data leaves this device
+      </footer>
     </div>
   );
 }

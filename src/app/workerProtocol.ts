@@ -1,0 +1,9 @@
+export interface WorkerRequest {
+  id: number;
+  task: string;
+  input: unknown;
+}
+
+export type WorkerReply =
+  | { id: number; ok: true; result: unknown }
+  | { id: number; ok: false; message: string; argument?: string; defect?: boolean };

@@ -1,0 +1,74 @@
+import { useEffect, useRef, useState } from 'preact/hooks';
+import type { WorkerReply } from '../app/workerProtocol';
+import type { ResultState } from './useResult';
+
+export interface ComputedState<R> extends ResultState<R> {
+  /** True while the worker is computing for the current input. */
+  busy: boolean;
+}
+
+const DEFECT_TEXT = 'This combination could not be computed. Check the values; the last good result is kept.';
+
+function startWorker(): Worker {
+  return new Worker(new URL('../app/compute.worker.ts', import.meta.url), { type: 'module' });
+}
+
+/**
+ * Runs the named task of src/features/tasks.ts in a Web Worker whenever `input` changes
+ * (compared by its JSON form). The latest input wins: a job still running for older
+ * input is cancelled by ending that worker, since a synchronous solve cannot be interrupted.
+ * `inputError` (a field that does not parse) skips the run and marks the result stale.
+ */
+export function useComputed<I, R>(task: string, input: I | undefined, inputError?: string): ComputedState<R> {
+  const [state, setState] = useState<ComputedState<R>>({ result: undefined, error: undefined, errorArgument: undefined, stale: false, busy: false });
+  const worker = useRef<Worker | undefined>(undefined);
+  const running = useRef(0);
+  const seq = useRef(0);
+  const key = input === undefined ? undefined : JSON.stringify(input);
+
+  useEffect(() => () => worker.current?.terminate(), []);
+
+  useEffect(() => {
+    if (key === undefined || inputError) {
+      setState((s) => ({ ...s, error: inputError ?? s.error, errorArgument: undefined, stale: s.result !== undefined, busy: false }));
+      return;
+    }
+    const id = ++seq.current;
+    if (running.current !== 0 && worker.current) {
+      worker.current.terminate();
+      worker.current = undefined;
+    }
+    if (!worker.current) {
+      try {
+        worker.current = startWorker();
+      } catch {
+        setState((s) => ({ ...s, error: 'This browser cannot run the background calculation.', busy: false }));
+        return;
+      }
+    }
+    const w = worker.current;
+    running.current = id;
+    setState((s) => ({ ...s, busy: true }));
+    w.onmessage = (ev: MessageEvent<WorkerReply>) => {
+      const msg = ev.data;
+      if (msg.id !== seq.current) return;
+      running.current = 0;
+      if (msg.ok) {
+        setState({ result: msg.result as R, error: undefined, errorArgument: undefined, stale: false, busy: false });
+      } else {
+        if (msg.defect) console.error(`worker task ${task}: ${msg.message}`);
+        setState((s) => ({ result: s.result, error: msg.defect ? DEFECT_TEXT : msg.message, errorArgument: msg.argument, stale: s.result !== undefined, busy: false }));
+      }
+    };
+    w.onerror = (ev) => {
+      ev.preventDefault();
+      running.current = 0;
+      worker.current?.terminate();
+      worker.current = undefined;
+      setState((s) => ({ ...s, error: DEFECT_TEXT, stale: s.result !== undefined, busy: false }));
+    };
+    w.postMessage({ id, task, input: JSON.parse(key) });
+  }, [task, key, inputError]);
+
+  return state;
+}

@@ -1,0 +1,54 @@
+import { useMemo, useState } from 'preact/hooks';
+import { InputError } from '../physics/errors';
+import { parseQuantity, type QuantityKind } from '../physics/units';
+
+export interface QuantityState {
+  /** The text as typed. */
+  text: string;
+  setText: (t: string) => void;
+  /** The parsed value in the kind's base unit (nm, km, mm, µm, dBm, plain), or undefined when it does not parse. */
+  value: number | undefined;
+  /** Plain-words reason the text does not parse; undefined when it does. */
+  error: string | undefined;
+  /** Conversion note, e.g. "1.55 µm = 1550 nm". */
+  conversion: string;
+  /** The argument name used in messages, e.g. `wavelengthNm`. */
+  argument: string;
+  kind: QuantityKind;
+  /** Set when parsing failed: rethrown by need() inside a computation. */
+  failure: InputError | undefined;
+}
+
+/** One typed field's state. Parsing is derived from the text, never stored twice. */
+export function useQuantity(argument: string, kind: QuantityKind, initialText: string): QuantityState {
+  const [text, setText] = useState(initialText);
+  const parsed = useMemo(() => {
+    try {
+      const p = parseQuantity(argument, text, kind);
+      return { value: p.value, conversion: p.conversion, failure: undefined };
+    } catch (e) {
+      if (e instanceof InputError) return { value: undefined, conversion: '', failure: e };
+      throw e;
+    }
+  }, [argument, text, kind]);
+  return {
+    text,
+    setText,
+    value: parsed.value,
+    conversion: parsed.conversion,
+    failure: parsed.failure,
+    error: parsed.failure ? fieldMessage(parsed.failure) : undefined,
+    argument,
+    kind,
+  };
+}
+
+function fieldMessage(e: InputError): string {
+  return `Expected ${e.allowed}${e.hint ? `: ${e.hint}` : ''}.`;
+}
+
+/** The field's value, or its parse error thrown — for use inside a useResult computation. */
+export function need(q: QuantityState): number {
+  if (q.value === undefined) throw q.failure ?? new InputError(q.argument, q.text, 'a number');
+  return q.value;
+}
