@@ -1,0 +1,219 @@
+// One way to pick a fiber on every screen: a standard category, a saved type, typed values
+// (core diameter + NA), or label values. The hook returns the resolved fiber, the reason there is
+// none, and the element to place in the form. Resolution itself lives in src/fibers/resolve.ts.
+import type { JSX } from 'preact';
+import { useEffect, useMemo, useState } from 'preact/hooks';
+import { NumberField } from './NumberField';
+import { useQuantity } from './useQuantity';
+import { errorText } from './errorText';
+import { formatNumber } from './format';
+import { presetsOfKinds, findPreset, type FiberKind } from '../fibers/presets';
+import { resolveLabel, resolvePreset, resolveTyped } from '../fibers/resolve';
+import type { ResolvedFiber } from '../fibers/resolved';
+
+export interface FiberPickerOptions {
+  /** Stable id, unique on the screen: names the fields and the remembered choice. */
+  id: string;
+  label: string;
+  kinds: FiberKind[];
+  defaultCategory: string;
+}
+
+export interface FiberPickerState {
+  fiber: ResolvedFiber | undefined;
+  error: string | undefined;
+  element: JSX.Element;
+}
+
+type Source = 'category' | 'saved' | 'typed' | 'label';
+
+/** What is remembered per picker id. Texts are kept as typed so a reload shows the same field. */
+interface PickerMemory {
+  source: Source;
+  category: string;
+  savedId?: string;
+  profile: 'step' | 'graded';
+  coreText: string;
+  naText: string;
+  alphaText: string;
+  cutoffText: string;
+  cutoffKind: 'fiber' | 'cable';
+  mfdText: string;
+  mfdWlText: string;
+}
+
+const MEMORY_PREFIX = 'modewright.fiberPicker.';
+
+function loadMemory(id: string): Partial<PickerMemory> {
+  try {
+    const raw = globalThis.localStorage?.getItem(MEMORY_PREFIX + id);
+    if (!raw) return {};
+    const m: unknown = JSON.parse(raw);
+    return m && typeof m === 'object' ? (m as Partial<PickerMemory>) : {};
+  } catch {
+    // Private mode or a damaged entry: start from the defaults, never fail the screen.
+    return {};
+  }
+}
+
+function saveMemory(id: string, m: PickerMemory): void {
+  try {
+    globalThis.localStorage?.setItem(MEMORY_PREFIX + id, JSON.stringify(m));
+  } catch {
+    // Storage full or refused: the choice is simply not remembered.
+  }
+}
+
+function str(v: unknown, fallback: string): string {
+  return typeof v === 'string' && v.length <= 64 ? v : fallback;
+}
+
+export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
+  const { id, label, kinds, defaultCategory } = opts;
+  const presets = useMemo(() => presetsOfKinds(kinds), [kinds.join(',')]);
+  const allowsSingleMode = kinds.includes('single-mode');
+  const mmOnly = !allowsSingleMode;
+  const [memory] = useState(() => loadMemory(id));
+
+  const validCategory = (c: unknown) => typeof c === 'string' && presets.some((p) => p.category === c);
+  const rememberedSource = memory.source;
+  const [source, setSource] = useState<Source>(
+    rememberedSource === 'typed' || rememberedSource === 'category' || (rememberedSource === 'label' && allowsSingleMode)
+      ? rememberedSource
+      : 'category',
+  );
+  const [category, setCategory] = useState<string>(
+    validCategory(memory.category) ? memory.category! : validCategory(defaultCategory) ? defaultCategory : presets[0]?.category ?? '',
+  );
+  const [profile, setProfile] = useState<'step' | 'graded'>(
+    memory.profile === 'step' || memory.profile === 'graded' ? memory.profile : mmOnly ? 'graded' : 'step',
+  );
+  const [cutoffKind, setCutoffKind] = useState<'fiber' | 'cable'>(memory.cutoffKind === 'fiber' ? 'fiber' : 'cable');
+  const core = useQuantity(`${id}-coreDiameterUm`, 'size', str(memory.coreText, mmOnly ? '50' : '8.2'));
+  const na = useQuantity(`${id}-na`, 'plain', str(memory.naText, mmOnly ? '0.2' : '0.14'));
+  const alpha = useQuantity(`${id}-gradedAlpha`, 'plain', str(memory.alphaText, '2'));
+  const cutoff = useQuantity(`${id}-cutoffWavelengthNm`, 'wavelength', str(memory.cutoffText, '1260'));
+  const mfd = useQuantity(`${id}-mfdUm`, 'size', str(memory.mfdText, '9.2'));
+  const mfdWl = useQuantity(`${id}-mfdWavelengthNm`, 'wavelength', str(memory.mfdWlText, '1310'));
+
+  useEffect(() => {
+    saveMemory(id, {
+      source,
+      category,
+      profile,
+      coreText: core.text,
+      naText: na.text,
+      alphaText: alpha.text,
+      cutoffText: cutoff.text,
+      cutoffKind,
+      mfdText: mfd.text,
+      mfdWlText: mfdWl.text,
+    });
+  }, [id, source, category, profile, core.text, na.text, alpha.text, cutoff.text, cutoffKind, mfd.text, mfdWl.text]);
+
+  const resolved = useMemo((): { fiber?: ResolvedFiber; error?: string } => {
+    try {
+      if (source === 'category') {
+        const p = findPreset(category);
+        if (!p) return { error: 'Choose a fiber category.' };
+        return { fiber: resolvePreset(p) };
+      }
+      if (source === 'typed') {
+        if (core.error || na.error || (profile === 'graded' && alpha.error)) return { error: 'Check the fiber values marked above.' };
+        return { fiber: resolveTyped({ profile, coreDiameterUm: core.value!, na: na.value!, gradedAlpha: alpha.value }, `${id}-`) };
+      }
+      if (source === 'label') {
+        if (cutoff.error || mfd.error || mfdWl.error) return { error: 'Check the label values marked above.' };
+        return {
+          fiber: resolveLabel({ cutoffWavelengthNm: cutoff.value!, cutoffKind, mfdUm: mfd.value!, mfdWavelengthNm: mfdWl.value! }, `${id}-`),
+        };
+      }
+      return { error: 'Choose a saved fiber type.' };
+    } catch (e) {
+      return { error: errorText(e) };
+    }
+  }, [source, category, profile, core.value, core.error, na.value, na.error, alpha.value, alpha.error, cutoff.value, cutoff.error, cutoffKind, mfd.value, mfd.error, mfdWl.value, mfdWl.error, id]);
+
+  const selId = `${id}-source`;
+  const element = (
+    <fieldset class="fiber-picker">
+      <legend>{label}</legend>
+      <div class="field">
+        <label for={selId}>Fiber from</label>
+        <select id={selId} value={source} onChange={(e) => setSource((e.currentTarget as HTMLSelectElement).value as Source)}>
+          <option value="category">A standard category</option>
+          <option value="typed">Typed values (core diameter and NA)</option>
+          {allowsSingleMode && <option value="label">A label (cutoff and mode field diameter)</option>}
+        </select>
+      </div>
+      {source === 'category' && (
+        <div class="field">
+          <label for={`${id}-category`}>Category</label>
+          <select id={`${id}-category`} value={category} onChange={(e) => setCategory((e.currentTarget as HTMLSelectElement).value)}>
+            {presets.map((p) => (
+              <option key={p.category} value={p.category}>
+                {p.title}
+              </option>
+            ))}
+          </select>
+        </div>
+      )}
+      {source === 'typed' && (
+        <div class="form">
+          <NumberField q={core} label="Core diameter" unit="µm" quickPicks={mmOnly ? [50, 62.5] : [8.2, 50, 62.5]} />
+          <NumberField q={na} label="Numerical aperture (NA)" unit="(no unit)" />
+          <div class="field">
+            <label for={`${id}-profile`}>Index profile</label>
+            <select id={`${id}-profile`} value={profile} onChange={(e) => setProfile((e.currentTarget as HTMLSelectElement).value as 'step' | 'graded')}>
+              <option value="step">Step-index</option>
+              <option value="graded">Graded-index</option>
+            </select>
+          </div>
+          {profile === 'graded' && <NumberField q={alpha} label="Profile exponent α" unit="(no unit)" help="About 2 for OM1 to OM5 multimode." />}
+        </div>
+      )}
+      {source === 'label' && (
+        <div class="form">
+          <NumberField q={cutoff} label="Cutoff wavelength" unit="nm" quickPicks={[1260, 1450, 1530]} />
+          <div class="field">
+            <label for={`${id}-cutoffKind`}>The label gives</label>
+            <select id={`${id}-cutoffKind`} value={cutoffKind} onChange={(e) => setCutoffKind((e.currentTarget as HTMLSelectElement).value as 'fiber' | 'cable')}>
+              <option value="cable">Cable cutoff (λcc)</option>
+              <option value="fiber">Fiber cutoff (λc)</option>
+            </select>
+          </div>
+          <NumberField q={mfd} label="Mode field diameter" unit="µm" />
+          <NumberField q={mfdWl} label="MFD measured at" unit="nm" quickPicks={[1310, 1550]} />
+        </div>
+      )}
+      {resolved.fiber && <FiberSummary fiber={resolved.fiber} />}
+      {resolved.error && (
+        <p class="field-error" role="alert">
+          <span aria-hidden="true">⚠ </span>
+          {resolved.error}
+        </p>
+      )}
+    </fieldset>
+  );
+  return { fiber: resolved.fiber, error: resolved.error, element };
+}
+
+/** The resolved numbers in one line, so the person sees what the calculator will use. */
+export function FiberSummary({ fiber }: { fiber: ResolvedFiber }) {
+  const profile = fiber.profile === 'graded' ? `graded-index, α = ${formatNumber(fiber.gradedAlpha)}` : 'step-index';
+  return (
+    <div class="note fiber-summary">
+      <p>
+        Uses: core diameter {formatNumber(fiber.coreRadiusUm * 2)} µm, NA {formatNumber(fiber.na)}, {profile}, cladding{' '}
+        {formatNumber(fiber.claddingDiameterUm)} µm.
+      </p>
+      {fiber.notes.length > 0 && (
+        <ul>
+          {fiber.notes.map((n, i) => (
+            <li key={i}>{n}</li>
+          ))}
+        </ul>
+      )}
+    </div>
+  );
+}
