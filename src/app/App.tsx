@@ -5,6 +5,7 @@ import { hrefFor, useRoute } from './route';
 import { SafetyReminder } from '../ui/SafetyNotice';
 import { ThemeSwitch } from '../ui/ThemeSwitch';
 import { APP_BUILD, APP_VERSION } from './version';
+import { UpdatePrompt } from '../pwa/UpdatePrompt';
 
 const screens = new Map(FEATURES.map((f) => [f.id, lazy(f.load)]));
 
@@ -38,6 +39,7 @@ export function App() {
       <footer class="footer note">
         Modewright {APP_VERSION} · build <span data-build-id>{APP_BUILD}</span> · works offline once loaded · no data leaves this device
       </footer>
+      <UpdatePrompt />
     </div>
   );
 }
