@@ -2,3 +2,4 @@
 // Each module below is one concept; see DEVELOPERS.md and REFERENCES.md.
 export * from './errors';
 export * from './units';
+export * from './power';
