@@ -3,3 +3,6 @@
 export * from './errors';
 export * from './units';
 export * from './power';
+export * from './jointLoss';
+export * from './otdr';
+export * from './linkBudget';
