@@ -1,0 +1,498 @@
+// The one IndexedDB module of the app: the saved fiber library, typed with idb's DBSchema.
+//
+// Schema history (one explicit migration per version, run in order inside `upgrade`):
+//   v1  store `fiberTypes` (keyPath id), index `byName`. One attenuation value per record
+//       (`attenuationDbPerKm` + `attenuationWavelengthNm`); graded fibers implied α = 2.
+//   v2  attenuation becomes a list `attenuation: [{ wavelengthNm, dbPerKm }]`; graded records get an
+//       explicit `gradedAlpha` (2, what v1 implied); index `byUpdatedAt`.
+//   v3  derived `nameKey` (normalised name) with index `byNameKey` replacing `byName`; store `meta`
+//       with a log of the migrations run on this device.
+// A migration never drops a record: what it cannot convert it leaves as it was, and validation marks it.
+import { openDB, type DBSchema, type IDBPDatabase, type IDBPTransaction } from 'idb';
+import { nameKeyOf, newFiberId, type FiberType, type FiberTypeInput } from './model';
+import { describeErrors, validateInput, validateRecord, type FieldErrors } from './validate';
+
+export const DB_NAME = 'modewright-fiber-library';
+export const SCHEMA_VERSION = 3;
+const CHANNEL_NAME = 'modewright-fiber-library';
+
+export interface MigrationLogEntry {
+  fromVersion: number;
+  toVersion: number;
+  atMs: number;
+  recordsConverted: number;
+}
+
+interface MetaEntry {
+  key: 'migrations';
+  log: MigrationLogEntry[];
+}
+
+export interface FiberDbSchema extends DBSchema {
+  fiberTypes: { key: string; value: FiberType; indexes: { byNameKey: string; byUpdatedAt: number } };
+  meta: { key: string; value: MetaEntry };
+}
+
+/** The record shape of schema v1, kept for the migration and its tests. */
+export interface FiberTypeV1 {
+  id: string;
+  name: string;
+  profile: 'step' | 'graded' | 'label';
+  coreDiameterUm?: number;
+  claddingDiameterUm: number;
+  na?: number;
+  cutoffWavelengthNm?: number;
+  cutoffKind?: 'fiber' | 'cable';
+  mfdUm?: number;
+  mfdWavelengthNm?: number;
+  attenuationDbPerKm?: number;
+  attenuationWavelengthNm?: number;
+  category?: string;
+  notes: string;
+  createdAt: number;
+  updatedAt: number;
+}
+
+/** The record shape of schema v2 (v3 adds nameKey). */
+export type FiberTypeV2 = Omit<FiberTypeV1, 'attenuationDbPerKm' | 'attenuationWavelengthNm'> & {
+  attenuation: { wavelengthNm: number; dbPerKm: number }[];
+  gradedAlpha?: number;
+};
+
+// ---------------------------------------------------------------------------------------------
+// Errors, each explained in plain words for the screen.
+
+export class StoreError extends Error {
+  override name = 'StoreError';
+}
+
+/** A record (or an input) failed validation: nothing was written. */
+export class InvalidRecordError extends StoreError {
+  override name = 'InvalidRecordError';
+  constructor(readonly errors: FieldErrors) {
+    super(`Not saved: ${describeErrors(errors).join(' ')}`);
+  }
+}
+
+/** The browser refused to store more (quota). Nothing of the failed write was kept. */
+export class StorageFullError extends StoreError {
+  override name = 'StorageFullError';
+  constructor() {
+    super(
+      'Not saved: the storage this browser allows the app is full. Nothing was changed. Free space on the phone or delete fiber types you no longer need, then try again.',
+    );
+  }
+}
+
+/** The connection was closed (a newer version of the app in another tab, or the browser). */
+export class StoreClosedError extends StoreError {
+  override name = 'StoreClosedError';
+  constructor(readonly reason: StoreStatus) {
+    super(STATUS_TEXT[reason] ?? 'The fiber library is closed. Reload this page.');
+  }
+}
+
+export class NotFoundError extends StoreError {
+  override name = 'NotFoundError';
+  constructor(id: string) {
+    super(`No fiber type with id ${id} is in the library (it may have been deleted in another tab).`);
+  }
+}
+
+export type StoreStatus = 'open' | 'blocked' | 'closed-for-upgrade' | 'terminated' | 'closed';
+
+export const STATUS_TEXT: Record<StoreStatus, string> = {
+  open: 'The fiber library is open.',
+  blocked:
+    'The fiber library is waiting: another tab of Modewright still has it open with an older version. Close or reload the other tab.',
+  'closed-for-upgrade':
+    'A newer version of Modewright opened in another tab and upgraded the fiber library. Reload this page to keep using it; your saved types are safe.',
+  terminated: 'The browser closed the fiber library unexpectedly (for example to free space). Reload this page; saved types are kept.',
+  closed: 'The fiber library is closed. Reload this page.',
+};
+
+function isQuotaError(e: unknown): boolean {
+  const n = (e as { name?: string } | null)?.name;
+  return n === 'QuotaExceededError' || n === 'NS_ERROR_DOM_QUOTA_REACHED';
+}
+
+function translate(e: unknown): unknown {
+  if (isQuotaError(e)) return new StorageFullError();
+  if ((e as { name?: string } | null)?.name === 'InvalidStateError') return new StoreClosedError('closed');
+  return e;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Migrations. Each takes the versionchange transaction; the store is reached untyped because the
+// typed schema describes only the newest version.
+
+type UpgradeTx = IDBPTransaction<FiberDbSchema, ('fiberTypes' | 'meta')[], 'versionchange'>;
+type AnyDb = IDBPDatabase<unknown>;
+type AnyTx = IDBPTransaction<unknown, string[], 'versionchange'>;
+
+export const MIGRATIONS: Record<number, (db: AnyDb, tx: AnyTx) => Promise<number>> = {
+  1: async (db) => {
+    const s = db.createObjectStore('fiberTypes', { keyPath: 'id' });
+    s.createIndex('byName', 'name');
+    return 0;
+  },
+  2: async (_db, tx) => {
+    const s = tx.objectStore('fiberTypes');
+    let n = 0;
+    for (let c = await s.openCursor(); c; c = await c.continue()) {
+      const r = c.value as Record<string, unknown>;
+      const next: Record<string, unknown> = { ...r };
+      const att: { wavelengthNm: number; dbPerKm: number }[] = [];
+      if (typeof r.attenuationDbPerKm === 'number' && typeof r.attenuationWavelengthNm === 'number') {
+        att.push({ wavelengthNm: r.attenuationWavelengthNm, dbPerKm: r.attenuationDbPerKm });
+      }
+      if (Array.isArray(r.attenuation)) continue; // already v2-shaped: leave untouched
+      delete next.attenuationDbPerKm;
+      delete next.attenuationWavelengthNm;
+      next.attenuation = att;
+      if (r.profile === 'graded' && r.gradedAlpha === undefined) next.gradedAlpha = V1_IMPLIED_GRADED_ALPHA;
+      await c.update(next);
+      n++;
+    }
+    s.createIndex('byUpdatedAt', 'updatedAt');
+    return n;
+  },
+  3: async (db, tx) => {
+    const s = tx.objectStore('fiberTypes');
+    let n = 0;
+    for (let c = await s.openCursor(); c; c = await c.continue()) {
+      const r = c.value as Record<string, unknown>;
+      if (typeof r.name !== 'string') continue; // damaged: left as it was, validation will say so
+      await c.update({ ...r, nameKey: nameKeyOf(r.name) });
+      n++;
+    }
+    s.deleteIndex('byName');
+    s.createIndex('byNameKey', 'nameKey');
+    db.createObjectStore('meta', { keyPath: 'key' });
+    return n;
+  },
+};
+
+/** v1 stored graded fibers without α and the app treated them as parabolic. */
+export const V1_IMPLIED_GRADED_ALPHA = 2;
+
+async function runMigrations(db: AnyDb, tx: AnyTx, oldVersion: number, newVersion: number): Promise<void> {
+  const log: MigrationLogEntry[] = [];
+  for (let v = oldVersion + 1; v <= newVersion; v++) {
+    const step = MIGRATIONS[v];
+    if (!step) throw new Error(`No migration to schema version ${v}`);
+    const recordsConverted = await step(db, tx);
+    log.push({ fromVersion: v - 1, toVersion: v, atMs: Date.now(), recordsConverted });
+  }
+  if (newVersion >= 3) {
+    const meta = tx.objectStore('meta');
+    const prev = (await meta.get('migrations')) as MetaEntry | undefined;
+    await meta.put({ key: 'migrations', log: [...(prev?.log ?? []), ...log] } satisfies MetaEntry);
+  }
+}
+
+// ---------------------------------------------------------------------------------------------
+
+export interface OpenOptions {
+  name?: string;
+  /** Only for tests of the migrations: open at an earlier schema version. */
+  version?: number;
+  onStatus?: (status: StoreStatus, message: string) => void;
+}
+
+export type ChangeListener = () => void;
+
+/** Opens (creating or upgrading) the database; the raw connection, for migration tests. */
+export async function openRaw(opts: OpenOptions & { onClose?: (s: StoreStatus) => void } = {}): Promise<IDBPDatabase<FiberDbSchema>> {
+  const version = opts.version ?? SCHEMA_VERSION;
+  const say = (s: StoreStatus) => opts.onStatus?.(s, STATUS_TEXT[s]);
+  let db: IDBPDatabase<FiberDbSchema> | undefined;
+  let migrationError: unknown;
+  const opening = openDB<FiberDbSchema>(opts.name ?? DB_NAME, version, {
+    upgrade(udb, oldVersion, newVersion, tx: UpgradeTx) {
+      // The migrations chain their requests on the versionchange transaction, which stays open
+      // until the last one settles. On any failure the transaction is aborted: the database stays
+      // at its old version with its old data, and the error is reported by open.
+      void runMigrations(udb as unknown as AnyDb, tx as unknown as AnyTx, oldVersion, newVersion ?? version).catch((e) => {
+        migrationError = e;
+        try {
+          tx.abort();
+        } catch {
+          // the transaction already ended with the failing request
+        }
+      });
+    },
+    blocked() {
+      say('blocked');
+    },
+    blocking() {
+      // A newer tab wants to upgrade: close cleanly so it can, and tell this tab's user to reload.
+      db?.close();
+      opts.onClose?.('closed-for-upgrade');
+      say('closed-for-upgrade');
+    },
+    terminated() {
+      opts.onClose?.('terminated');
+      say('terminated');
+    },
+  });
+  try {
+    db = await opening;
+  } catch (e) {
+    throw translate(migrationError ?? e);
+  }
+  say('open');
+  return db;
+}
+
+export class FiberStore {
+  private status: StoreStatus = 'open';
+  private readonly listeners = new Set<ChangeListener>();
+  private readonly channel: BroadcastChannel | undefined;
+
+  private constructor(private readonly db: IDBPDatabase<FiberDbSchema>, channelName: string) {
+    this.channel = typeof BroadcastChannel === 'function' ? new BroadcastChannel(channelName) : undefined;
+    if (this.channel) this.channel.onmessage = () => this.emit();
+  }
+
+  static async open(opts: OpenOptions = {}): Promise<FiberStore> {
+    // The callbacks can fire only after open resolves, when the holder is filled.
+    const holder: { store?: FiberStore } = {};
+    const db = await openRaw({
+      ...opts,
+      onClose: (s) => {
+        if (holder.store) holder.store.status = s;
+        holder.store?.emit();
+      },
+    });
+    holder.store = new FiberStore(db, `${CHANNEL_NAME}:${opts.name ?? DB_NAME}`);
+    return holder.store;
+  }
+
+  get state(): StoreStatus {
+    return this.status;
+  }
+
+  /** Called after any change here or in another tab. Returns the unsubscribe function. */
+  subscribe(l: ChangeListener): () => void {
+    this.listeners.add(l);
+    return () => this.listeners.delete(l);
+  }
+
+  private emit(): void {
+    for (const l of [...this.listeners]) l();
+  }
+
+  private changed(): void {
+    this.emit();
+    this.channel?.postMessage('changed');
+  }
+
+  private ensureOpen(): void {
+    if (this.status !== 'open') throw new StoreClosedError(this.status);
+  }
+
+  private async run<T>(fn: () => Promise<T>): Promise<T> {
+    this.ensureOpen();
+    try {
+      return await fn();
+    } catch (e) {
+      throw translate(e);
+    }
+  }
+
+  /** Every saved type, sorted by name (then by id for equal names). */
+  list(): Promise<FiberType[]> {
+    return this.run(async () => {
+      const all = await this.db.getAllFromIndex('fiberTypes', 'byNameKey');
+      return all.sort((a, b) => (a.nameKey < b.nameKey ? -1 : a.nameKey > b.nameKey ? 1 : a.id < b.id ? -1 : 1));
+    });
+  }
+
+  get(id: string): Promise<FiberType | undefined> {
+    return this.run(() => this.db.get('fiberTypes', id));
+  }
+
+  count(): Promise<number> {
+    return this.run(() => this.db.count('fiberTypes'));
+  }
+
+  /** Validates and adds a new type; throws InvalidRecordError (nothing written) when a field is wrong. */
+  add(input: FiberTypeInput, nowMs = Date.now()): Promise<FiberType> {
+    const v = validateInput(input);
+    if (!v.ok) return Promise.reject(new InvalidRecordError(v.errors));
+    return this.write({ ...v.value, id: newFiberId(), createdAt: nowMs, updatedAt: nowMs, nameKey: '' }, 'add');
+  }
+
+  /** Validates and replaces the content of an existing type, keeping its id and creation time. */
+  update(id: string, input: FiberTypeInput, nowMs = Date.now()): Promise<FiberType> {
+    const v = validateInput(input);
+    if (!v.ok) return Promise.reject(new InvalidRecordError(v.errors));
+    return this.run(async () => {
+      const tx = this.db.transaction('fiberTypes', 'readwrite');
+      const old = await tx.store.get(id);
+      if (!old) {
+        tx.abort();
+        await tx.done.catch(() => undefined);
+        throw new NotFoundError(id);
+      }
+      const rec = checked({ ...v.value, id, createdAt: old.createdAt, updatedAt: Math.max(nowMs, old.createdAt), nameKey: '' });
+      await tx.store.put(rec);
+      await tx.done;
+      this.changed();
+      return rec;
+    });
+  }
+
+  /** Puts back a whole record as it was (undo of a delete). Validated like every write. */
+  restore(record: FiberType): Promise<FiberType> {
+    return this.write(record, 'put');
+  }
+
+  /** Deletes and returns the deleted record, so the screen can offer undo. */
+  delete(id: string): Promise<FiberType | undefined> {
+    return this.run(async () => {
+      const tx = this.db.transaction('fiberTypes', 'readwrite');
+      const old = await tx.store.get(id);
+      if (old) await tx.store.delete(id);
+      await tx.done;
+      if (old) this.changed();
+      return old;
+    });
+  }
+
+  private write(record: FiberType, how: 'add' | 'put'): Promise<FiberType> {
+    return this.run(async () => {
+      const rec = checked(record);
+      const tx = this.db.transaction('fiberTypes', 'readwrite');
+      await (how === 'add' ? tx.store.add(rec) : tx.store.put(rec));
+      await tx.done;
+      this.changed();
+      return rec;
+    });
+  }
+
+  /**
+   * Writes a whole import in ONE transaction: either every record lands, or (on any failure,
+   * quota included) none does and the library is exactly as before.
+   */
+  applyRecords(records: readonly FiberType[], mode: 'merge' | 'replace'): Promise<void> {
+    return this.run(async () => {
+      const recs = records.map(checked); // validate all before touching anything
+      const tx = this.db.transaction('fiberTypes', 'readwrite');
+      try {
+        if (mode === 'replace') await tx.store.clear();
+        for (const r of recs) await tx.store.put(r);
+        await tx.done;
+      } catch (e) {
+        try {
+          tx.abort();
+        } catch {
+          // already aborted by the failing request
+        }
+        await tx.done.catch(() => undefined);
+        throw e;
+      }
+      this.changed();
+    });
+  }
+
+  migrationLog(): Promise<MigrationLogEntry[]> {
+    return this.run(async () => (await this.db.get('meta', 'migrations'))?.log ?? []);
+  }
+
+  close(): void {
+    if (this.status === 'open') this.status = 'closed';
+    this.db.close();
+    this.channel?.close();
+  }
+}
+
+function checked(record: FiberType): FiberType {
+  const v = validateRecord(record);
+  if (!v.ok) throw new InvalidRecordError(v.errors);
+  return v.value;
+}
+
+// ---------------------------------------------------------------------------------------------
+// The app's one shared connection.
+
+let shared: Promise<FiberStore> | undefined;
+const statusListeners = new Set<(s: StoreStatus, message: string) => void>();
+
+/** The app-wide store, opened on first use. Status changes (blocked, closed for upgrade) go to onStoreStatus listeners. */
+export function getFiberStore(): Promise<FiberStore> {
+  if (!shared) {
+    if (typeof indexedDB === 'undefined') return Promise.reject(new StoreError('This browser offers no storage for saved fiber types (IndexedDB is missing or switched off).'));
+    shared = FiberStore.open({ onStatus: (s, m) => statusListeners.forEach((l) => l(s, m)) });
+    shared.catch(() => {
+      shared = undefined;
+    });
+  }
+  return shared;
+}
+
+export function onStoreStatus(l: (s: StoreStatus, message: string) => void): () => void {
+  statusListeners.add(l);
+  return () => statusListeners.delete(l);
+}
+
+// ---------------------------------------------------------------------------------------------
+// Persistent storage: without it the browser may evict the library when space runs low.
+
+export type PersistenceState = 'granted' | 'not-granted' | 'unsupported';
+
+export interface PersistenceInfo {
+  state: PersistenceState;
+  usageBytes?: number;
+  quotaBytes?: number;
+  message: string;
+}
+
+const PERSIST_TEXT: Record<PersistenceState, string> = {
+  granted: 'Persistent storage is granted: the browser will not clear the library to free space.',
+  'not-granted':
+    'Persistent storage is not granted: the browser may clear the library when the phone runs low on space. Export a backup now and then. Installing the app to the home screen often allows it.',
+  unsupported: 'This browser cannot promise to keep the library: export a backup now and then.',
+};
+
+type StorageLike = Pick<StorageManager, 'persist' | 'persisted'> & Partial<Pick<StorageManager, 'estimate'>>;
+
+function storageManager(): StorageLike | undefined {
+  const s = (globalThis.navigator as Navigator | undefined)?.storage;
+  return s && typeof s.persisted === 'function' && typeof s.persist === 'function' ? s : undefined;
+}
+
+async function info(state: PersistenceState, s: StorageLike | undefined): Promise<PersistenceInfo> {
+  let usageBytes: number | undefined;
+  let quotaBytes: number | undefined;
+  try {
+    const e = await s?.estimate?.();
+    usageBytes = e?.usage;
+    quotaBytes = e?.quota;
+  } catch {
+    // estimate is optional; its absence changes nothing
+  }
+  return { state, usageBytes, quotaBytes, message: PERSIST_TEXT[state] };
+}
+
+/** Whether persistence is granted now, without asking. */
+export async function persistenceStatus(storage: StorageLike | undefined = storageManager()): Promise<PersistenceInfo> {
+  if (!storage) return info('unsupported', undefined);
+  try {
+    return info((await storage.persisted()) ? 'granted' : 'not-granted', storage);
+  } catch {
+    return info('unsupported', storage);
+  }
+}
+
+/** Asks the browser for persistent storage (it may grant it silently, prompt, or refuse) and says what it decided. */
+export async function requestPersistence(storage: StorageLike | undefined = storageManager()): Promise<PersistenceInfo> {
+  if (!storage) return info('unsupported', undefined);
+  try {
+    if (await storage.persisted()) return info('granted', storage);
+    return info((await storage.persist()) ? 'granted' : 'not-granted', storage);
+  } catch {
+    return info('unsupported', storage);
+  }
+}
