@@ -6,3 +6,4 @@ export * from './power';
 export * from './jointLoss';
 export * from './otdr';
 export * from './linkBudget';
+export * from './materials';
