@@ -7,3 +7,4 @@ export * from './jointLoss';
 export * from './otdr';
 export * from './linkBudget';
 export * from './materials';
+export * from './radialSolver';
