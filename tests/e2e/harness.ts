@@ -8,7 +8,6 @@ import { extname, join, resolve, sep } from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
-export { FEATURES } from '../../src/features/registry';
 
 export const REPO_ROOT = fileURLToPath(new URL('../../', import.meta.url));
 

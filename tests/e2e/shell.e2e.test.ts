@@ -7,7 +7,6 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import {
   BUILDS,
-  FEATURES,
   freshProfile,
   launchBrowser,
   newContext,
@@ -19,6 +18,7 @@ import {
   type FreshProfile,
   type StaticServer,
 } from './harness';
+import { FEATURES } from '../../src/features/registry';
 
 const UPDATE_OFFER = 'A new version is ready — reload to update.';
 
