@@ -8,3 +8,4 @@ export * from './otdr';
 export * from './linkBudget';
 export * from './materials';
 export * from './radialSolver';
+export * from './laserSafety';
