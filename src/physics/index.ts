@@ -9,3 +9,4 @@ export * from './linkBudget';
 export * from './materials';
 export * from './radialSolver';
 export * from './laserSafety';
+export * from './coupling';

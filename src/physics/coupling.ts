@@ -1,0 +1,351 @@
+// Power coupled between fibers by overlap integrals of their actual mode fields (scalar, weakly guiding).
+// η = |∫∫ E1 E2* dA|² / (∫∫|E1|² dA ∫∫|E2|² dA) (Snyder & Love 1983, ch. 20; Marcuse 1977 for the Gaussian case).
+//
+// A single-mode field f(ρ) centred at lateral offset d (along x) from a multimode axis is written in the
+// multimode fiber's polar coordinates; its azimuthal cosine coefficients
+//   F_l(r) = ∫₀^{2π} f(√(r² + d² − 2 r d cos φ)) cos(lφ) dφ
+// give the overlap with the cos(lφ) orientation of each LP_lm mode. The sin(lφ) orientation overlaps zero
+// (the integrand is odd in φ), so an offset in any direction couples to one orientation per LP mode. F_l is
+// computed by the trapezoid rule in φ, which is spectrally accurate for smooth periodic integrands
+// (Trefethen & Weideman 2014, SIAM Review 56(3)); for a Gaussian f it equals 2π e^{−(r²+d²)/w²} I_l(2rd/w²).
+import { InputError, ModelError, requireNumber, requirePositive } from './errors';
+import { DB_PER_NEPER } from './jointLoss';
+import { gradedIndexProfile, solveRadialModes, stepIndexProfile, type RadialSolverOptions } from './radialSolver';
+
+/** A circularly symmetric field amplitude f(ρ), ρ in µm, with the radius beyond which it is negligible. */
+export interface RadialField {
+  /** Short description, e.g. "Gaussian, MFD 9.2 µm". */
+  name: string;
+  at: (rhoUm: number) => number;
+  /** f(ρ)² < 1e-16 f(0)² beyond this radius (µm). */
+  extentUm: number;
+  /** ∫∫ f² dA = 2π ∫ f(ρ)² ρ dρ (µm²). */
+  powerUm2: number;
+}
+
+/** Gaussian amplitude exp(−ρ²/w²), w = MFD/2 (Marcuse 1977). */
+export function gaussianRadialField(mfdUm: number): RadialField {
+  const w = requirePositive('mfdUm', mfdUm, { max: 100, unit: 'µm' }) / 2;
+  // exp(−2ρ²/w²) < 1e-16 for ρ > w √(8 ln 10 · 2)/2 ≈ 4.3 w.
+  const extentUm = w * Math.sqrt(8 * Math.LN10);
+  return { name: `Gaussian, MFD ${mfdUm} µm`, at: (rho) => Math.exp(-(rho * rho) / (w * w)), extentUm, powerUm2: (Math.PI * w * w) / 2 };
+}
+
+/**
+ * A tabulated field on a uniform grid ρ_i = i·stepUm (linear interpolation, zero beyond the table).
+ * Power by the trapezoid rule on the same table.
+ */
+export function tabulatedRadialField(name: string, stepUm: number, values: ArrayLike<number>): RadialField {
+  const h = requirePositive('stepUm', stepUm, { unit: 'µm' });
+  const n = values.length;
+  if (n < 3) throw new InputError('values', n, 'at least 3 samples');
+  const peak = Math.max(...Array.from(values, Math.abs));
+  let last = n - 1;
+  while (last > 1 && values[last] * values[last] < 1e-16 * peak * peak) last--;
+  let power = 0;
+  for (let i = 1; i < n; i++) {
+    const a = values[i - 1] * values[i - 1] * (i - 1) * h;
+    const b = values[i] * values[i] * i * h;
+    power += 0.5 * (a + b) * h;
+  }
+  const table = Float64Array.from(values);
+  return {
+    name,
+    extentUm: Math.min((n - 1) * h, (last + 1) * h),
+    powerUm2: 2 * Math.PI * power,
+    at: (rho) => {
+      const x = rho / h;
+      const i = Math.floor(x);
+      if (i >= n - 1) return 0;
+      const t = x - i;
+      return table[i] * (1 - t) + table[i + 1] * t;
+    },
+  };
+}
+
+/** Multimode fiber described for the launch calculation. */
+export interface MultimodeFiberSpec {
+  profile: 'step' | 'graded';
+  coreRadiusUm: number;
+  na: number;
+  /** Graded-index α (default 2). Ignored for a step. */
+  alpha?: number;
+  claddingIndex?: number;
+}
+
+export interface MultimodeModeSet {
+  /** Cell-centred radii (µm) on which every field is sampled. */
+  rUm: Float64Array;
+  stepUm: number;
+  v: number;
+  modes: { l: number; m: number; b: number; principal: number; degeneracy: 2 | 4; field: Float64Array }[];
+  totalModeCount: number;
+  /** How the modes were obtained, for "how computed". */
+  method: string;
+}
+
+/** Guided modes of a multimode fiber on a common radial grid, each with ∫ψ² r dr = 1. */
+export function multimodeModes(fiber: MultimodeFiberSpec, wavelengthNm: number, options: RadialSolverOptions = {}): MultimodeModeSet {
+  if (!fiber || (fiber.profile !== 'step' && fiber.profile !== 'graded')) {
+    throw new InputError('fiber.profile', fiber?.profile, "'step' or 'graded'");
+  }
+  const profile =
+    fiber.profile === 'graded'
+      ? gradedIndexProfile({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, alpha: fiber.alpha ?? 2, claddingIndex: fiber.claddingIndex })
+      : stepIndexProfile({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, claddingIndex: fiber.claddingIndex });
+  const s = solveRadialModes(profile, wavelengthNm, options);
+  return {
+    rUm: s.rUm,
+    stepUm: s.stepUm,
+    v: s.v,
+    modes: s.modes.map((m) => ({ l: m.l, m: m.m, b: m.b, principal: m.principal, degeneracy: m.degeneracy, field: m.field })),
+    totalModeCount: s.totalModeCount,
+    method: `${profile.name} profile, scalar finite-difference mode solver (${s.rUm.length} radial cells)`,
+  };
+}
+
+/** Fewest azimuthal samples on [0, π]. */
+const MIN_PHI_SAMPLES = 32;
+/** Most azimuthal samples on [0, π] (cost guard). */
+const MAX_PHI_SAMPLES = 4096;
+/** Samples per spot radius along the arc where the field varies fastest (trapezoid converges long before). */
+const PHI_SAMPLES_PER_SPOT = 12;
+
+export interface AzimuthalCoefficients {
+  /** F_l(r_j), l = 0..lMax. */
+  coefficients: Float64Array[];
+  /** G(r_j) = ∫₀^{2π} f² dφ with the same rule: Σ_j G_j r_j h is the field's power on this grid. */
+  ringPower: Float64Array;
+}
+
+/**
+ * F_l(r_j) for l = 0..lMax: azimuthal cosine coefficients of f centred at offset d.
+ * Trapezoid on the full circle, folded onto [0, π] by symmetry (end points weighted ½).
+ */
+export function azimuthalCoefficients(f: RadialField, rUm: ArrayLike<number>, offsetUm: number, lMax: number): AzimuthalCoefficients {
+  const nr = rUm.length;
+  const out: Float64Array[] = [];
+  for (let l = 0; l <= lMax; l++) out.push(new Float64Array(nr));
+  const ringPower = new Float64Array(nr);
+  if (offsetUm === 0) {
+    for (let j = 0; j < nr; j++) {
+      const fv = f.at(rUm[j]);
+      out[0][j] = 2 * Math.PI * fv;
+      ringPower[j] = 2 * Math.PI * fv * fv;
+    }
+    return { coefficients: out, ringPower };
+  }
+  const d = offsetUm;
+  // Near φ = 0 the distance grows like √((r−d)² + r d φ²): the arc scale is spot/√(r d).
+  const spot = f.extentUm / 4;
+  const rFar = d + f.extentUm;
+  const nPhi = Math.min(MAX_PHI_SAMPLES, Math.max(MIN_PHI_SAMPLES, 4 * (lMax + 1), Math.ceil((PHI_SAMPLES_PER_SPOT * Math.PI * Math.sqrt(rFar * d)) / spot)));
+  const dPhi = Math.PI / nPhi;
+  const cosPhi = new Float64Array(nPhi + 1);
+  for (let i = 0; i <= nPhi; i++) cosPhi[i] = Math.cos(i * dPhi);
+  // cos(lφ_i) table, row-major by i.
+  const cosTable = new Float64Array((nPhi + 1) * (lMax + 1));
+  for (let i = 0; i <= nPhi; i++) for (let l = 0; l <= lMax; l++) cosTable[i * (lMax + 1) + l] = Math.cos(l * i * dPhi);
+  const acc = new Float64Array(lMax + 1);
+  for (let j = 0; j < nr; j++) {
+    const r = rUm[j];
+    if (Math.abs(r - d) > f.extentUm) continue; // f is negligible on the whole circle
+    acc.fill(0);
+    let acc2 = 0;
+    const r2d2 = r * r + d * d;
+    const twoRd = 2 * r * d;
+    for (let i = 0; i <= nPhi; i++) {
+      const rho2 = r2d2 - twoRd * cosPhi[i];
+      const fv = f.at(Math.sqrt(rho2 > 0 ? rho2 : 0));
+      if (fv === 0) continue;
+      const wgt = (i === 0 || i === nPhi ? 0.5 : 1) * fv;
+      acc2 += wgt * fv;
+      const base = i * (lMax + 1);
+      for (let l = 0; l <= lMax; l++) acc[l] += wgt * cosTable[base + l];
+    }
+    for (let l = 0; l <= lMax; l++) out[l][j] = 2 * dPhi * acc[l];
+    ringPower[j] = 2 * dPhi * acc2;
+  }
+  return { coefficients: out, ringPower };
+}
+
+export interface ModeCoupling {
+  l: number;
+  m: number;
+  principal: number;
+  degeneracy: 2 | 4;
+  b: number;
+  /** Fraction of the single-mode power in this LP mode (both orientations; the sin one is zero). */
+  fraction: number;
+}
+
+export interface LaunchResult {
+  direction: 'single-mode to multimode' | 'multimode to single-mode';
+  /** Fraction of the launched power that ends up guided in the receiving fiber, 0..1. */
+  coupledFraction: number;
+  lossDb: number;
+  /** Per LP mode of the multimode fiber, b descending. SM→MM: power launched into it; MM→SM: its share of what reaches the SM fiber. */
+  perMode: ModeCoupling[];
+  /** Sum of perMode fractions by principal mode number g = 2m + l − 1 (ascending g). */
+  perGroup: { principal: number; fraction: number; modeCount: number }[];
+  /** Fewest LP modes that together carry 90 % of the coupled power. */
+  modesFor90Percent: number;
+  multimodeV: number;
+  /** Every guided mode of the multimode fiber, polarisations and orientations counted. */
+  multimodeModeCount: number;
+  method: string;
+}
+
+/** Share of the coupled power used for the "modes carrying 90 %" count. */
+export const POWER_SHARE_FOR_MODE_COUNT = 0.9;
+
+function overlapFractions(f: RadialField, set: MultimodeModeSet, offsetUm: number): number[] {
+  const lMax = set.modes.reduce((mx, m) => Math.max(mx, m.l), 0);
+  const { coefficients: coeff, ringPower } = azimuthalCoefficients(f, set.rUm, offsetUm, lMax);
+  // The field's power by the same quadrature as the overlaps: then the discrete modes, orthonormal on this
+  // grid, obey Bessel's inequality exactly and the guided fractions can never sum above 1 by rounding of h.
+  let power = 0;
+  for (let j = 0; j < set.rUm.length; j++) power += ringPower[j] * set.rUm[j];
+  power *= set.stepUm;
+  if (!(power > 0)) throw new ModelError('The single-mode field lies entirely outside the multimode fiber’s grid.', 'overlap integral', 'reduce the offset');
+  return set.modes.map((mode) => {
+    const fl = coeff[mode.l];
+    let s = 0;
+    for (let j = 0; j < set.rUm.length; j++) s += mode.field[j] * fl[j] * set.rUm[j];
+    s *= set.stepUm;
+    // Unit-power transverse fields: ψ/√(2π) for l = 0, ψ cos(lφ)/√π for l ≥ 1.
+    const c = mode.l === 0 ? s / Math.sqrt(2 * Math.PI) : s / Math.sqrt(Math.PI);
+    return (c * c) / power;
+  });
+}
+
+function summarise(direction: LaunchResult['direction'], set: MultimodeModeSet, weights: number[], coupledFraction: number, method: string): LaunchResult {
+  const total = weights.reduce((s, x) => s + x, 0);
+  const perMode: ModeCoupling[] = set.modes.map((m, i) => ({
+    l: m.l,
+    m: m.m,
+    principal: m.principal,
+    degeneracy: m.degeneracy,
+    b: m.b,
+    fraction: weights[i],
+  }));
+  const groups = new Map<number, { fraction: number; modeCount: number }>();
+  for (const pm of perMode) {
+    const g = groups.get(pm.principal) ?? { fraction: 0, modeCount: 0 };
+    g.fraction += pm.fraction;
+    g.modeCount += 1;
+    groups.set(pm.principal, g);
+  }
+  const perGroup = [...groups.entries()].sort((a, b) => a[0] - b[0]).map(([principal, g]) => ({ principal, ...g }));
+  const sorted = [...weights].sort((a, b) => b - a);
+  let acc = 0;
+  let modesFor90Percent = 0;
+  for (const x of sorted) {
+    if (acc >= POWER_SHARE_FOR_MODE_COUNT * total) break;
+    acc += x;
+    modesFor90Percent++;
+  }
+  const clamped = Math.min(1, Math.max(0, coupledFraction));
+  if (!(clamped > 0)) {
+    throw new ModelError('No power is coupled: the field lies outside the other fiber’s guided modes.', 'overlap integral', 'reduce the offset');
+  }
+  return {
+    direction,
+    coupledFraction: clamped,
+    lossDb: Math.max(0, -DB_PER_NEPER * Math.log(clamped)),
+    perMode,
+    perGroup,
+    modesFor90Percent,
+    multimodeV: set.v,
+    multimodeModeCount: set.totalModeCount,
+    method,
+  };
+}
+
+/** Radial cells for a single-mode overlap: 400 across the narrower field's extent (≈ 90 per spot radius). */
+const OVERLAP_CELLS_PER_EXTENT = 400;
+const OVERLAP_MIN_CELLS = 200;
+
+/** Largest offset accepted (µm). */
+export const MAX_LAUNCH_OFFSET_UM = 200;
+
+/** Power from a single-mode field (centred, or offset by offsetUm) into each guided mode of a multimode fiber. */
+export function singleModeToMultimode(input: { source: RadialField; modes: MultimodeModeSet; offsetUm?: number }): LaunchResult {
+  const d = requireNumber('offsetUm', input?.offsetUm ?? 0, { min: 0, max: MAX_LAUNCH_OFFSET_UM, unit: 'µm' });
+  const fr = overlapFractions(input.source, input.modes, d);
+  const total = fr.reduce((s, x) => s + x, 0);
+  if (total > 1 + 1e-6) throw new ModelError(`Overlap sum ${total} exceeds 1: the grid is too coarse for this field.`, 'overlap integral');
+  return summarise('single-mode to multimode', input.modes, fr, total, `overlap of ${input.source.name} with each mode: ${input.modes.method}`);
+}
+
+/** How the multimode fiber's power is spread over its modes before the joint. */
+export type ModePowerDistribution =
+  | { kind: 'uniform' }
+  /** Equal power in every mode of principal number g ≤ fraction × highest g, none in the rest. */
+  | { kind: 'restricted'; groupFraction: number };
+
+/**
+ * Power from a multimode fiber with the given mode power distribution into a single-mode fiber.
+ * Modes are mutually incoherent (a long multimode fiber scrambles their phases, common practice); each of the
+ * M guided modes (orientations and polarisations counted) carries its share, and each polarisation couples into
+ * the matching single-mode polarisation with the same spatial overlap η. So P = Σ p_mode η_mode; for a uniform
+ * distribution P = (2/M) Σ_LP η = (2/M) × (SM→MM coupled fraction), by reciprocity.
+ */
+export function multimodeToSingleMode(input: { target: RadialField; modes: MultimodeModeSet; distribution: ModePowerDistribution; offsetUm?: number }): LaunchResult {
+  const d = requireNumber('offsetUm', input?.offsetUm ?? 0, { min: 0, max: MAX_LAUNCH_OFFSET_UM, unit: 'µm' });
+  const set = input.modes;
+  const dist = input.distribution;
+  const gMax = set.modes.reduce((mx, m) => Math.max(mx, m.principal), 1);
+  let gLimit = gMax;
+  if (dist?.kind === 'restricted') {
+    const frac = requireNumber('groupFraction', dist.groupFraction, { min: 0, minInclusive: false, max: 1 });
+    gLimit = Math.max(1, Math.floor(frac * gMax));
+  } else if (dist?.kind !== 'uniform') {
+    throw new InputError('distribution', dist, "{ kind: 'uniform' } or { kind: 'restricted', groupFraction }");
+  }
+  const lit = set.modes.map((m) => m.principal <= gLimit);
+  const litCount = set.modes.reduce((s, m, i) => s + (lit[i] ? m.degeneracy : 0), 0);
+  const eta = overlapFractions(input.target, set, d);
+  // Each LP mode: degeneracy/litCount of the power; half its members are cos-oriented (l ≥ 1) or it is l = 0.
+  // Only the cos orientation overlaps; each of its two polarisations brings η.
+  const contributions = set.modes.map((m, i) => (lit[i] ? (2 * eta[i]) / litCount : 0));
+  const total = contributions.reduce((s, x) => s + x, 0);
+  const described = dist.kind === 'uniform' ? 'uniform over all modes' : `uniform over mode groups g ≤ ${gLimit} of ${gMax}`;
+  return summarise('multimode to single-mode', set, contributions, total, `incoherent sum over modes (${described}); ${set.method}`);
+}
+
+/**
+ * Exact overlap of two circularly symmetric single-mode fields with lateral offset (no gap, no tilt):
+ * η = (∫∫ f1(r) f2(|r − d|) dA)² / (P1 P2) (Snyder & Love 1983, ch. 20). With LP01 fields this is the exact
+ * scalar joint loss to set beside the Gaussian formulas of Marcuse 1977.
+ */
+export function fieldOverlapLoss(f1: RadialField, f2: RadialField, offsetUm: number): { fraction: number; lossDb: number } {
+  const d = requireNumber('offsetUm', offsetUm, { min: 0, max: MAX_LAUNCH_OFFSET_UM, unit: 'µm' });
+  // One midpoint grid, fine against the narrower field, out to where both fields vanish. The powers are
+  // taken with the same rule as the overlap so that the quadrature error cancels (identical fields give 1).
+  const extent = Math.max(f1.extentUm, f2.extentUm);
+  const narrow = Math.min(f1.extentUm, f2.extentUm);
+  const cells = Math.max(OVERLAP_MIN_CELLS, Math.ceil((OVERLAP_CELLS_PER_EXTENT * extent) / narrow));
+  const h = extent / cells;
+  const r = new Float64Array(cells);
+  for (let j = 0; j < cells; j++) r[j] = (j + 0.5) * h;
+  const f2coeff = azimuthalCoefficients(f2, r, d, 0).coefficients[0];
+  let s = 0;
+  let p1 = 0;
+  let p2 = 0;
+  for (let j = 0; j < cells; j++) {
+    const a = f1.at(r[j]);
+    const b = f2.at(r[j]);
+    s += a * f2coeff[j] * r[j];
+    p1 += a * a * r[j];
+    p2 += b * b * r[j];
+  }
+  s *= h;
+  p1 *= 2 * Math.PI * h;
+  p2 *= 2 * Math.PI * h;
+  const fraction = Math.min(1, (s * s) / (p1 * p2));
+  if (!(fraction > 0)) {
+    throw new ModelError(`The two fields do not overlap at a ${d} µm offset: no power is coupled.`, 'overlap integral', 'reduce the offset');
+  }
+  return { fraction, lossDb: Math.max(0, -10 * Math.log10(fraction)) };
+}
