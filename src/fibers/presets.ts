@@ -96,7 +96,7 @@ function g657(sub: 'A1' | 'A2' | 'B2' | 'B3', bend: PresetFact[]): CategoryPrese
     kind: 'single-mode',
     title: `G.657.${sub} bend-insensitive single-mode`,
     standard: 'ITU-T G.657 (11/2016)',
-    profile: { value: 'step', source: 'equivalent step-index (the real profile may be trench-assisted)' },
+    profile: { value: 'step', source: 'equivalent step-index, common practice (the real profile may be trench-assisted)' },
     claddingDiameterUm: { value: 125, source: `${G657}: 125.0 ± 0.7 µm` },
     cutoffWavelengthNm: { value: 1260, source: `${G657}: cable cutoff ≤ 1260 nm; ${AT_LIMIT}` },
     cutoffKind: 'cable',

@@ -2,8 +2,9 @@
 // Pure functions (no DOM, no store): the picker and the library call them, the tests call them.
 import { InputError, requireNumber, requirePositive, requireWavelengthNm } from '../physics/errors';
 import type { ResolvedFiber } from './resolved';
-import type { CategoryPreset } from './presets';
+import { findPreset, type CategoryPreset, type FiberKind } from './presets';
 import { deriveStepIndex, type LabelValues } from './fromLabel';
+import type { FiberType } from './model';
 
 /** Plausible size limits for a silica fiber; anything outside is a typing slip. Common practice. */
 export const CORE_DIAMETER_MAX_UM = 1000;
@@ -126,4 +127,47 @@ export function resolvePreset(p: CategoryPreset): ResolvedFiber {
       ...fromLabel.notes.slice(1),
     ],
   };
+}
+
+/** NA of a core/cladding index pair. Switches to the mode engine's numericalAperture once it is exported. */
+// Snyder & Love 1983, NA = √(n1² − n2²) (weak guidance not needed for this definition).
+function naOfIndices(coreIndex: number, claddingIndex: number): number {
+  return Math.sqrt(coreIndex * coreIndex - claddingIndex * claddingIndex);
+}
+
+/** A saved fiber type (already validated by the store). */
+export function resolveSaved(r: FiberType): ResolvedFiber {
+  const extras = {
+    name: r.name,
+    origin: 'saved' as const,
+    attenuationDbPerKm: r.attenuation.map((a) => ({ ...a })),
+    ...(r.category ? { category: r.category } : {}),
+  };
+  if (r.profile === 'label') {
+    const fromLabel = resolveLabel({
+      cutoffWavelengthNm: r.cutoffWavelengthNm!,
+      cutoffKind: r.cutoffKind!,
+      mfdUm: r.mfdUm!,
+      mfdWavelengthNm: r.mfdWavelengthNm!,
+      coreDiameterUm: r.coreDiameterUm,
+      claddingDiameterUm: r.claddingDiameterUm,
+    });
+    return { ...fromLabel, ...extras };
+  }
+  const usesIndices = r.na === undefined && r.coreIndex !== undefined && r.claddingIndex !== undefined;
+  const na = usesIndices ? naOfIndices(r.coreIndex!, r.claddingIndex!) : r.na!;
+  const typed = resolveTyped({ profile: r.profile, gradedAlpha: r.gradedAlpha, coreDiameterUm: r.coreDiameterUm!, na, claddingDiameterUm: r.claddingDiameterUm });
+  return {
+    ...typed,
+    ...extras,
+    ...(r.cutoffWavelengthNm !== undefined ? { cutoffWavelengthNm: r.cutoffWavelengthNm, cutoffKind: r.cutoffKind } : {}),
+    ...(r.mfdUm !== undefined ? { mfdUm: r.mfdUm, mfdWavelengthNm: r.mfdWavelengthNm } : {}),
+    notes: usesIndices ? [`NA = √(n₁² − n₂²) from the saved indices ${r.coreIndex} and ${r.claddingIndex}.`] : [],
+  };
+}
+
+/** Single-mode or multimode when it is known (label types are single-mode; a category says); else undefined. */
+export function kindOfSaved(r: Pick<FiberType, 'profile' | 'category'>): FiberKind | undefined {
+  if (r.profile === 'label') return 'single-mode';
+  return r.category ? findPreset(r.category)?.kind : undefined;
 }

@@ -8,8 +8,11 @@ import { useQuantity } from './useQuantity';
 import { errorText } from './errorText';
 import { formatNumber } from './format';
 import { presetsOfKinds, findPreset, type FiberKind } from '../fibers/presets';
-import { resolveLabel, resolvePreset, resolveTyped } from '../fibers/resolve';
+import { kindOfSaved, resolveLabel, resolvePreset, resolveSaved, resolveTyped } from '../fibers/resolve';
 import type { ResolvedFiber } from '../fibers/resolved';
+import type { FiberType } from '../fibers/model';
+import { getFiberStore } from '../fibers/db';
+import { validateRecord } from '../fibers/validate';
 
 export interface FiberPickerOptions {
   /** Stable id, unique on the screen: names the fields and the remembered choice. */
@@ -68,6 +71,32 @@ function str(v: unknown, fallback: string): string {
   return typeof v === 'string' && v.length <= 64 ? v : fallback;
 }
 
+/** The saved types, kept current when the library changes (here or in another tab). */
+export function useSavedFiberTypes(): { types: FiberType[] | undefined; error: string | undefined } {
+  const [types, setTypes] = useState<FiberType[] | undefined>(undefined);
+  const [error, setError] = useState<string | undefined>(undefined);
+  useEffect(() => {
+    let live = true;
+    let off: (() => void) | undefined;
+    getFiberStore()
+      .then((store) => {
+        const load = () =>
+          store.list().then(
+            (all) => live && setTypes(all.filter((r) => validateRecord(r).ok)),
+            (e: unknown) => live && setError(e instanceof Error ? e.message : String(e)),
+          );
+        off = store.subscribe(() => void load());
+        return load();
+      })
+      .catch((e: unknown) => live && setError(e instanceof Error ? e.message : String(e)));
+    return () => {
+      live = false;
+      off?.();
+    };
+  }, []);
+  return { types, error };
+}
+
 export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
   const { id, label, kinds, defaultCategory } = opts;
   const presets = useMemo(() => presetsOfKinds(kinds), [kinds.join(',')]);
@@ -78,7 +107,7 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
   const validCategory = (c: unknown) => typeof c === 'string' && presets.some((p) => p.category === c);
   const rememberedSource = memory.source;
   const [source, setSource] = useState<Source>(
-    rememberedSource === 'typed' || rememberedSource === 'category' || (rememberedSource === 'label' && allowsSingleMode)
+    rememberedSource === 'typed' || rememberedSource === 'category' || rememberedSource === 'saved' || (rememberedSource === 'label' && allowsSingleMode)
       ? rememberedSource
       : 'category',
   );
@@ -88,6 +117,15 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
   const [profile, setProfile] = useState<'step' | 'graded'>(
     memory.profile === 'step' || memory.profile === 'graded' ? memory.profile : mmOnly ? 'graded' : 'step',
   );
+  const [savedId, setSavedId] = useState<string>(typeof memory.savedId === 'string' ? memory.savedId : '');
+  const savedAll = useSavedFiberTypes();
+  const saved = useMemo(() => {
+    const fits = (t: FiberType) => {
+      const k = kindOfSaved(t);
+      return k === undefined || kinds.includes(k);
+    };
+    return { error: savedAll.error, types: savedAll.types?.filter(fits) };
+  }, [savedAll.types, savedAll.error, kinds.join(',')]);
   const [cutoffKind, setCutoffKind] = useState<'fiber' | 'cable'>(memory.cutoffKind === 'fiber' ? 'fiber' : 'cable');
   const core = useQuantity(`${id}-coreDiameterUm`, 'size', str(memory.coreText, mmOnly ? '50' : '8.2'));
   const na = useQuantity(`${id}-na`, 'plain', str(memory.naText, mmOnly ? '0.2' : '0.14'));
@@ -100,6 +138,7 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
     saveMemory(id, {
       source,
       category,
+      savedId,
       profile,
       coreText: core.text,
       naText: na.text,
@@ -109,7 +148,7 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
       mfdText: mfd.text,
       mfdWlText: mfdWl.text,
     });
-  }, [id, source, category, profile, core.text, na.text, alpha.text, cutoff.text, cutoffKind, mfd.text, mfdWl.text]);
+  }, [id, source, category, savedId, profile, core.text, na.text, alpha.text, cutoff.text, cutoffKind, mfd.text, mfdWl.text]);
 
   const resolved = useMemo((): { fiber?: ResolvedFiber; error?: string } => {
     try {
@@ -128,11 +167,15 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
           fiber: resolveLabel({ cutoffWavelengthNm: cutoff.value!, cutoffKind, mfdUm: mfd.value!, mfdWavelengthNm: mfdWl.value! }, `${id}-`),
         };
       }
-      return { error: 'Choose a saved fiber type.' };
+      if (saved.error) return { error: saved.error };
+      if (!saved.types) return { error: 'Loading the saved fiber types…' };
+      const r = saved.types.find((t) => t.id === savedId) ?? saved.types[0];
+      if (!r) return { error: 'No fiber types are saved yet: add one on the Fiber types screen, or choose another way.' };
+      return { fiber: resolveSaved(r) };
     } catch (e) {
       return { error: errorText(e) };
     }
-  }, [source, category, profile, core.value, core.error, na.value, na.error, alpha.value, alpha.error, cutoff.value, cutoff.error, cutoffKind, mfd.value, mfd.error, mfdWl.value, mfdWl.error, id]);
+  }, [saved.types, saved.error, savedId, source, category, profile, core.value, core.error, na.value, na.error, alpha.value, alpha.error, cutoff.value, cutoff.error, cutoffKind, mfd.value, mfd.error, mfdWl.value, mfdWl.error, id]);
 
   const selId = `${id}-source`;
   const element = (
@@ -142,6 +185,7 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
         <label for={selId}>Fiber from</label>
         <select id={selId} value={source} onChange={(e) => setSource((e.currentTarget as HTMLSelectElement).value as Source)}>
           <option value="category">A standard category</option>
+          <option value="saved">A saved fiber type</option>
           <option value="typed">Typed values (core diameter and NA)</option>
           {allowsSingleMode && <option value="label">A label (cutoff and mode field diameter)</option>}
         </select>
@@ -153,6 +197,18 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
             {presets.map((p) => (
               <option key={p.category} value={p.category}>
                 {p.title}
+              </option>
+            ))}
+          </select>
+        </div>
+      )}
+      {source === 'saved' && saved.types && saved.types.length > 0 && (
+        <div class="field">
+          <label for={`${id}-saved`}>Saved type</label>
+          <select id={`${id}-saved`} value={saved.types.some((t) => t.id === savedId) ? savedId : saved.types[0].id} onChange={(e) => setSavedId((e.currentTarget as HTMLSelectElement).value)}>
+            {saved.types.map((t) => (
+              <option key={t.id} value={t.id}>
+                {t.name}
               </option>
             ))}
           </select>
