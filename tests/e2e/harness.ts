@@ -268,7 +268,7 @@ export async function waitForScreen(page: Page): Promise<void> {
   await page.waitForFunction(() => {
     const main = document.querySelector('main');
     if (!main || main.querySelector('.loading')) return false;
-    const title = main.querySelector('h1');
-    return !!title && main.children.length > 1;
+    // The title and something after it: the screen's own content, not just the frame.
+    return !!main.querySelector('h1 ~ *');
   });
 }
