@@ -10,3 +10,4 @@ export * from './materials';
 export * from './radialSolver';
 export * from './laserSafety';
 export * from './coupling';
+export * from './bessel';
