@@ -96,6 +96,6 @@ export function contentSignature(f: FiberTypeInput): string {
 /** The input part of a stored record (for editing and duplicating). */
 export function inputOf(f: FiberType): FiberTypeInput {
   const out: Record<string, unknown> = {};
-  for (const k of CONTENT_FIELDS) if (f[k] !== undefined) out[k] = k === 'attenuation' ? f.attenuation.map((a) => ({ ...a })) : f[k];
+  for (const k of CONTENT_FIELDS) if (f[k] !== undefined) out[k] = k === 'attenuation' ? (Array.isArray(f.attenuation) ? f.attenuation.map((a) => ({ ...a })) : []) : f[k];
   return out as unknown as FiberTypeInput;
 }

@@ -1,0 +1,45 @@
+// Whether the browser promises to keep the library, and the button to ask it to.
+import { useEffect, useState } from 'preact/hooks';
+import { persistenceStatus, requestPersistence, type PersistenceInfo } from '../../fibers/db';
+
+function size(bytes: number | undefined): string {
+  if (bytes === undefined) return '—';
+  if (bytes < 1024 * 1024) return `${Math.round(bytes / 1024)} kB`;
+  return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+}
+
+export function StoragePanel() {
+  const [info, setInfo] = useState<PersistenceInfo | undefined>(undefined);
+  const [asking, setAsking] = useState(false);
+  useEffect(() => {
+    let live = true;
+    void persistenceStatus().then((i) => live && setInfo(i));
+    return () => {
+      live = false;
+    };
+  }, []);
+  const ask = async () => {
+    setAsking(true);
+    setInfo(await requestPersistence());
+    setAsking(false);
+  };
+  if (!info) return <p class="note">Checking storage…</p>;
+  return (
+    <div class="storage" data-persistence={info.state}>
+      <p class={info.state === 'granted' ? 'verdict-ok' : 'verdict-warn'} role="status">
+        {info.state === 'granted' ? '✓ ' : '⚠ '}
+        {info.message}
+      </p>
+      {info.usageBytes !== undefined && (
+        <p class="note">
+          This app uses {size(info.usageBytes)} of the {size(info.quotaBytes)} the browser allows it.
+        </p>
+      )}
+      {info.state === 'not-granted' && (
+        <button type="button" disabled={asking} onClick={ask}>
+          Ask the browser to keep the library
+        </button>
+      )}
+    </div>
+  );
+}
