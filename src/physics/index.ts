@@ -11,3 +11,5 @@ export * from './radialSolver';
 export * from './laserSafety';
 export * from './coupling';
 export * from './bessel';
+export * from './fiber';
+export * from './lpModes';
