@@ -13,3 +13,5 @@ export * from './coupling';
 export * from './bessel';
 export * from './fiber';
 export * from './lpModes';
+export * from './dispersion';
+export * from './bending';

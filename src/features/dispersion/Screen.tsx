@@ -1,4 +1,157 @@
-// PLACEHOLDER: replaced by the issue that builds this calculator. Must not survive to a release.
+// Chromatic dispersion of a single-mode fiber type: D(λ) over 1200–1650 nm with its material and
+// waveguide parts, the zero-dispersion wavelength and slope, and the dispersion limit of a link.
+import { NumberField } from '../../ui/NumberField';
+import { need, useQuantity } from '../../ui/useQuantity';
+import { useResult } from '../../ui/useResult';
+import { ResultCard } from '../../ui/ResultCard';
+import { HowComputed } from '../../ui/HowComputed';
+import { LinePlot } from '../../ui/Plot';
+import { formatFixed, formatNumber } from '../../ui/format';
+import { reportText } from '../../ui/copyText';
+import { FiberSummary, useFiberPicker } from '../../ui/FiberPicker';
+import {
+  chromaticDispersion,
+  DISPERSION_CRITERION,
+  dispersionFiberFromNa,
+  dispersionLimitedReach,
+  dispersionSweep,
+  InputError,
+  linkDispersionPsPerNm,
+  zeroDispersion,
+} from '../../physics';
+
+const SWEEP = { fromNm: 1200, toNm: 1650, stepNm: 1 };
+
 export default function Screen() {
-  return <p>This calculator is being built.</p>;
+  const picker = useFiberPicker({ id: 'dispersion', label: 'Single-mode fiber type', kinds: ['single-mode'], defaultCategory: 'G.652.D' });
+  const wavelength = useQuantity('wavelengthNm', 'wavelength', '1550');
+  const length = useQuantity('lengthKm', 'length', '40');
+  const bitRate = useQuantity('bitRateGbps', 'plain', '10');
+  const width = useQuantity('spectralWidthNm', 'plain', '0.1');
+  const fiber = picker.fiber;
+
+  // The curve depends on the fiber only; the link figures on the rest.
+  const curve = useResult(() => {
+    if (!fiber) throw new InputError('fiber', undefined, 'a single-mode fiber type', picker.error ?? 'pick a fiber type');
+    const model = dispersionFiberFromNa({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, referenceWavelengthNm: fiber.mfdWavelengthNm ?? 1310 });
+    return { model, sweep: dispersionSweep(model, SWEEP), zero: zeroDispersion(model) };
+  }, [fiber, picker.error]);
+
+  const link = useResult(() => {
+    if (!curve.result || curve.stale) throw new InputError('fiber', undefined, 'a fiber type that gives a dispersion curve');
+    const at = chromaticDispersion(curve.result.model, need(wavelength));
+    const totalPsPerNm = linkDispersionPsPerNm(at.totalPsPerNmKm, need(length));
+    const reach = dispersionLimitedReach({ dispersionPsPerNmKm: at.totalPsPerNmKm, bitRateGbps: need(bitRate), spectralWidthNm: need(width) });
+    return { at, totalPsPerNm, reach, lengthKm: need(length) };
+  }, [curve.result, curve.stale, wavelength.text, length.text, bitRate.text, width.text]);
+  const calc = { error: link.error, errorArgument: link.errorArgument };
+
+  const c = curve.result;
+  const l = link.result;
+  const withinReach = l && (l.reach.reachKm === undefined || l.lengthKm <= l.reach.reachKm);
+
+  const copy =
+    c &&
+    l &&
+    reportText({
+      title: 'Chromatic dispersion',
+      inputs: [
+        ['Fiber type', fiber?.name ?? '—'],
+        ['Model', `step index, core radius ${formatNumber(c.model.coreRadiusUm, 4)} µm, ${formatNumber(c.model.germaniaFraction * 100, 3)} mol % GeO₂ core, silica cladding`],
+        ['Wavelength', `${l.at.wavelengthNm} nm`],
+        ['Link length', `${formatNumber(l.lengthKm, 5)} km`],
+        ['Bit rate', `${bitRate.text} Gbit/s`],
+        ['Source spectral width (RMS)', `${width.text} nm`],
+      ],
+      outputs: [
+        ['D', `${formatFixed(l.at.totalPsPerNmKm, 2)} ps/(nm·km) (material ${formatFixed(l.at.materialPsPerNmKm, 2)}, waveguide ${formatFixed(l.at.waveguidePsPerNmKm, 2)}, profile ${formatFixed(l.at.profilePsPerNmKm, 2)})`],
+        ['Zero-dispersion wavelength', c.zero ? `${formatFixed(c.zero.wavelengthNm, 1)} nm, slope ${formatFixed(c.zero.slopePsPerNm2Km, 4)} ps/(nm²·km)` : 'none in 1200–1700 nm'],
+        ['Link dispersion', `${formatFixed(l.totalPsPerNm, 1)} ps/nm`],
+        ['Dispersion-limited reach', l.reach.reachKm === undefined ? 'no first-order limit at zero dispersion' : `${formatNumber(l.reach.reachKm, 4)} km`],
+      ],
+      assumptions: [`Criterion: ${l.reach.criterion}.`, 'Weakly guiding step-index model of the fiber type; Sellmeier: Malitson 1965 (silica), Fleming 1984 (GeO₂).'],
+    });
+
+  return (
+    <>
+      <h2>Fiber and wavelength</h2>
+      {picker.element}
+      {fiber && <FiberSummary fiber={fiber} />}
+      <div class="form">
+        <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={[1310, 1490, 1550, 1625]} calc={calc} />
+        <NumberField q={length} label="Link length" unit="km" calc={calc} />
+        <NumberField q={bitRate} label="Bit rate" unit="Gbit/s" quickPicks={[1, 2.5, 10]} calc={calc} />
+        <NumberField q={width} label="Source spectral width (RMS)" unit="nm" help="RMS width of the source spectrum; a DFB laser is far below 0.1 nm, a Fabry–Perot laser about 1–3 nm." calc={calc} />
+      </div>
+
+      <ResultCard title="Dispersion curve" stale={curve.stale} error={curve.error}>
+        {c && (
+          <>
+            <LinePlot
+              title="Chromatic dispersion D(λ)"
+              xLabel="Wavelength (nm)"
+              yLabel="D (ps/(nm·km))"
+              xRange={[SWEEP.fromNm, SWEEP.toNm]}
+              series={[
+                { name: 'Total', points: c.sweep.map((p) => [p.wavelengthNm, p.totalPsPerNmKm]) },
+                { name: 'Material', points: c.sweep.map((p) => [p.wavelengthNm, p.materialPsPerNmKm]), dashed: true },
+                { name: 'Waveguide', points: c.sweep.map((p) => [p.wavelengthNm, p.waveguidePsPerNmKm]), dashed: true },
+              ]}
+              markers={c.zero ? [{ x: c.zero.wavelengthNm, label: `λ₀ ${formatFixed(c.zero.wavelengthNm, 1)} nm` }] : []}
+            />
+            <dl class="kv">
+              <dt>Zero-dispersion wavelength</dt>
+              <dd>{c.zero ? `${formatFixed(c.zero.wavelengthNm, 1)} nm` : 'None between 1200 and 1700 nm'}</dd>
+              {c.zero && (
+                <>
+                  <dt>Slope at the zero</dt>
+                  <dd>{formatFixed(c.zero.slopePsPerNm2Km, 4)} ps/(nm²·km)</dd>
+                </>
+              )}
+              <dt>Core model</dt>
+              <dd>
+                Step index, core radius {formatNumber(c.model.coreRadiusUm, 4)} µm, {formatNumber(c.model.germaniaFraction * 100, 3)} mol % GeO₂ over pure
+                silica (from the fiber type’s NA)
+              </dd>
+            </dl>
+          </>
+        )}
+      </ResultCard>
+
+      <ResultCard title="At this wavelength and over the link" stale={link.stale} error={link.errorArgument && link.errorArgument !== 'fiber' ? undefined : curve.result ? link.error : undefined} copyText={copy}>
+        {l && (
+          <dl class="kv">
+            <dt>Dispersion D</dt>
+            <dd>{formatFixed(l.at.totalPsPerNmKm, 2)} ps/(nm·km)</dd>
+            <dt>Parts</dt>
+            <dd>
+              material {formatFixed(l.at.materialPsPerNmKm, 2)}, waveguide {formatFixed(l.at.waveguidePsPerNmKm, 2)}, profile {formatFixed(l.at.profilePsPerNmKm, 2)} ps/(nm·km)
+            </dd>
+            <dt>V-number</dt>
+            <dd>{formatNumber(l.at.v, 4)}</dd>
+            <dt>Group index</dt>
+            <dd>{formatNumber(l.at.groupIndex, 6)}</dd>
+            <dt>Link dispersion</dt>
+            <dd>{formatFixed(l.totalPsPerNm, 1)} ps/nm</dd>
+            <dt>Dispersion-limited reach</dt>
+            <dd class={withinReach ? 'verdict-ok' : 'verdict-bad'}>
+              {l.reach.reachKm === undefined
+                ? 'No first-order limit at zero dispersion (slope and polarization-mode dispersion then set the limit).'
+                : `${formatNumber(l.reach.reachKm, 4)} km: the ${formatNumber(l.lengthKm, 5)} km link is ${withinReach ? 'within' : 'beyond'} it.`}
+            </dd>
+          </dl>
+        )}
+      </ResultCard>
+
+      <HowComputed
+        formula="n_eff² = n₂² + b(V)(n₁² − n₂²); D = −(λ/c) d²n_eff/dλ², differentiated analytically with d(Vb)/dV and V d²(Vb)/dV² of LP01"
+        source="Gloge 1971 (weakly guiding LP modes); Malitson 1965 and Fleming 1984 (Sellmeier); reach criterion Agrawal §2.4"
+        assumptions={[
+          'The fiber type is represented by its equivalent step-index core (radius and NA) with a GeO₂-doped core over pure silica.',
+          `Reach criterion: ${DISPERSION_CRITERION}.`,
+        ]}
+        validity="600–1800 nm; single-mode operation; real fibers with shaped profiles (G.655, G.657) differ from the step-index model."
+      />
+    </>
+  );
 }
