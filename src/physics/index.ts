@@ -14,4 +14,3 @@ export * from './bessel';
 export * from './fiber';
 export * from './lpModes';
 export * from './dispersion';
-export * from './bending';
