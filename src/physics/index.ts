@@ -14,3 +14,4 @@ export * from './bessel';
 export * from './fiber';
 export * from './lpModes';
 export * from './dispersion';
+export * from './bending';
