@@ -1,6 +1,6 @@
 // Turns each way of choosing a fiber into the one ResolvedFiber every calculator reads.
 // Pure functions (no DOM, no store): the picker and the library call them, the tests call them.
-import { InputError, requireNumber, requirePositive, requireWavelengthNm } from '../physics/errors';
+import { InputError, numericalAperture, requireNumber, requirePositive, requireWavelengthNm } from '../physics';
 import type { ResolvedFiber } from './resolved';
 import { findPreset, type CategoryPreset, type FiberKind } from './presets';
 import { deriveStepIndex, type LabelValues } from './fromLabel';
@@ -129,12 +129,6 @@ export function resolvePreset(p: CategoryPreset): ResolvedFiber {
   };
 }
 
-/** NA of a core/cladding index pair. Switches to the mode engine's numericalAperture once it is exported. */
-// Snyder & Love 1983, NA = √(n1² − n2²) (weak guidance not needed for this definition).
-function naOfIndices(coreIndex: number, claddingIndex: number): number {
-  return Math.sqrt(coreIndex * coreIndex - claddingIndex * claddingIndex);
-}
-
 /** A saved fiber type (already validated by the store). */
 export function resolveSaved(r: FiberType): ResolvedFiber {
   const extras = {
@@ -155,7 +149,7 @@ export function resolveSaved(r: FiberType): ResolvedFiber {
     return { ...fromLabel, ...extras };
   }
   const usesIndices = r.na === undefined && r.coreIndex !== undefined && r.claddingIndex !== undefined;
-  const na = usesIndices ? naOfIndices(r.coreIndex!, r.claddingIndex!) : r.na!;
+  const na = usesIndices ? numericalAperture({ coreIndex: r.coreIndex!, claddingIndex: r.claddingIndex! }) : r.na!;
   const typed = resolveTyped({ profile: r.profile, gradedAlpha: r.gradedAlpha, coreDiameterUm: r.coreDiameterUm!, na, claddingDiameterUm: r.claddingDiameterUm });
   return {
     ...typed,

@@ -122,6 +122,8 @@ export function validateInput(raw: unknown): Validation<FiberTypeInput> {
       const n1 = c.num('coreIndex', 'The core index', { min: INDEX_MIN, max: INDEX_MAX, required: true });
       const n2 = c.num('claddingIndex', 'The cladding index', { min: INDEX_MIN, max: INDEX_MAX, required: true });
       if (n1 !== undefined && n2 !== undefined && n1 <= n2) c.fail('coreIndex', `The core index (${n1}) must be higher than the cladding index (${n2}) for the fiber to guide light.`);
+      // NA = √(n1² − n2²) must stay below 1 (Snyder & Love 1983, definition of NA).
+      else if (n1 !== undefined && n2 !== undefined && n1 * n1 - n2 * n2 >= 1) c.fail('coreIndex', `These indices give an NA of 1 or more, which no fiber in air can have; check them.`);
     } else c.fail('na', 'The numerical aperture (NA) is needed, or else the core and cladding indices.');
   }
 

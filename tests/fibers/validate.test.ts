@@ -57,6 +57,7 @@ const BAD: [string, Partial<FiberTypeInput> | Record<string, unknown>, string, F
   ['a core index below the cladding index', { na: undefined, coreIndex: 1.44, claddingIndex: 1.45 }, 'coreIndex'],
   ['a cladding index missing', { na: undefined, coreIndex: 1.45 }, 'claddingIndex'],
   ['an index below 1', { na: undefined, coreIndex: 1.45, claddingIndex: 0.9 }, 'claddingIndex'],
+  ['indices giving an NA of 1 or more', { na: undefined, coreIndex: 1.8, claddingIndex: 1.4 }, 'coreIndex'],
   ['an α on a step-index type', { gradedAlpha: 2 }, 'gradedAlpha'],
   ['a cutoff without saying fiber or cable', { cutoffWavelengthNm: 1260 }, 'cutoffKind'],
   ['a cutoff kind that is neither', { cutoffWavelengthNm: 1260, cutoffKind: 'jumper' }, 'cutoffKind'],
