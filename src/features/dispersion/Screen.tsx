@@ -8,7 +8,7 @@ import { HowComputed } from '../../ui/HowComputed';
 import { LinePlot } from '../../ui/Plot';
 import { formatFixed, formatNumber } from '../../ui/format';
 import { reportText } from '../../ui/copyText';
-import { FiberSummary, useFiberPicker } from '../../ui/FiberPicker';
+import { useFiberPicker } from '../../ui/FiberPicker';
 import {
   chromaticDispersion,
   DISPERSION_CRITERION,
@@ -76,7 +76,6 @@ export default function Screen() {
     <>
       <h2>Fiber and wavelength</h2>
       {picker.element}
-      {fiber && <FiberSummary fiber={fiber} />}
       <div class="form">
         <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={[1310, 1490, 1550, 1625]} calc={calc} />
         <NumberField q={length} label="Link length" unit="km" calc={calc} />

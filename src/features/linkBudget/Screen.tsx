@@ -9,7 +9,7 @@ import { HowComputed } from '../../ui/HowComputed';
 import { BarChart } from '../../ui/Plot';
 import { formatFixed } from '../../ui/format';
 import { reportText } from '../../ui/copyText';
-import { FiberSummary, useFiberPicker } from '../../ui/FiberPicker';
+import { useFiberPicker } from '../../ui/FiberPicker';
 import { findPreset } from '../../fibers/presets';
 import type { ResolvedFiber } from '../../fibers/resolved';
 import {
@@ -174,7 +174,6 @@ export default function Screen() {
     <>
       <h2>The link</h2>
       {picker.element}
-      {fiber && <FiberSummary fiber={fiber} />}
       <div class="form">
         <div class="field">
           <label for="lb-rules">Loss allowances</label>
