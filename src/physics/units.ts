@@ -61,6 +61,7 @@ export function parseQuantity(argument: string, text: string, kind: QuantityKind
   const numSigned = Object.is(num, -0) ? 0 : num;
 
   if (kind === 'power') return parsePower(argument, raw, numSigned, unitRaw);
+  if (!Object.hasOwn(UNIT_FACTORS, kind)) throw new InputError('kind', kind, Object.keys(BASE_UNIT).join(', '));
 
   const table = UNIT_FACTORS[kind];
   const unitKey = lookupUnit(table, unitRaw);
@@ -69,7 +70,10 @@ export function parseQuantity(argument: string, text: string, kind: QuantityKind
     throw new InputError(argument, raw, `a number${known ? ` with unit ${known}` : ''}`, `unknown unit "${unitRaw}"`);
   }
   const factor = table[unitKey]!;
-  const value = numSigned * factor;
+  // 1e308 m in a millimetre field overflows to Infinity; −5e-324 % underflows to −0, read as 0 like "-0".
+  const scaled = numSigned * factor;
+  if (!Number.isFinite(scaled)) throw new InputError(argument, raw, 'a finite number', 'the number is too large');
+  const value = Object.is(scaled, -0) ? 0 : scaled;
   const base = BASE_UNIT[kind];
   const conversion = unitKey !== '' && factor !== 1 ? `${formatPlain(numSigned)} ${unitKey} = ${formatPlain(value)} ${base}` : '';
   return { value, typedUnit: unitKey, conversion };
@@ -78,7 +82,8 @@ export function parseQuantity(argument: string, text: string, kind: QuantityKind
 function lookupUnit(table: Record<string, number>, unit: string): string | undefined {
   // No unit typed: the base unit of the kind (the key whose factor is 1) is assumed.
   if (unit === '') return Object.keys(table).find((k) => table[k] === 1);
-  if (unit in table) return unit;
+  // Own keys only: "1 constructor" must not find Object.prototype.constructor.
+  if (Object.hasOwn(table, unit)) return unit;
   const lower = unit.toLowerCase();
   return Object.keys(table).find((k) => k.toLowerCase() === lower);
 }
@@ -87,16 +92,18 @@ function parsePower(argument: string, raw: string, num: number, unit: string): P
   const u = unit.toLowerCase().replace('μ', 'µ');
   if (u === '' || u === 'dbm') return { value: num, typedUnit: u === '' ? '' : 'dBm', conversion: '' };
   const mwFactor: Record<string, number> = { mw: 1, 'µw': 1e-3, uw: 1e-3, nw: 1e-6, w: 1000 };
-  const f = mwFactor[u];
+  const f = Object.hasOwn(mwFactor, u) ? mwFactor[u] : undefined;
   if (f === undefined) throw new InputError(argument, raw, 'a power in dBm, mW, µW, nW or W', `unknown unit "${unit}"`);
   const mw = num * f;
   if (!(mw > 0)) throw new InputError(argument, raw, 'a power greater than 0 in mW, µW, nW or W', 'a linear power must be positive to have a dBm value');
   const dbm = 10 * Math.log10(mw);
+  if (!Number.isFinite(dbm)) throw new InputError(argument, raw, 'a finite power', 'the number is too large');
   return { value: dbm, typedUnit: unit, conversion: `${formatPlain(num)} ${unit} = ${formatPlain(dbm)} dBm` };
 }
 
 /** Plain formatting for conversion notes: up to 6 significant digits, no exponent for ordinary values. */
 export function formatPlain(v: number): string {
+  if (typeof v !== 'number' || !Number.isFinite(v)) throw new InputError('value', v, 'a finite number');
   if (v === 0) return '0';
   const a = Math.abs(v);
   if (a >= 1e-4 && a < 1e9) return String(Number(v.toPrecision(6)));
