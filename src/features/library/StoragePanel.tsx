@@ -5,7 +5,8 @@ import { persistenceStatus, requestPersistence, type PersistenceInfo } from '../
 function size(bytes: number | undefined): string {
   if (bytes === undefined) return '—';
   if (bytes < 1024 * 1024) return `${Math.round(bytes / 1024)} kB`;
-  return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+  if (bytes < 1024 ** 3) return `${(bytes / (1024 * 1024)).toFixed(1)} MB`;
+  return `${(bytes / 1024 ** 3).toFixed(1)} GB`;
 }
 
 export function StoragePanel() {
