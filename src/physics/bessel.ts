@@ -309,6 +309,23 @@ export function besselKTermUnchecked(l: number, w: number): number {
   return w / ratio;
 }
 
+/**
+ * ln(e^x K_l(x)) by the ratio recurrence of besselKTermUnchecked: never overflows, for fields
+ * K_l(wρ)/K_l(w) at high order and small argument. Internal: x > 0.
+ */
+export function besselKLogScaledUnchecked(l: number, x: number): number {
+  const [k0, k1] = besselK01ScaledUnchecked(x);
+  let log = Math.log(k0);
+  if (l === 0) return log;
+  let ratio = k1 / k0;
+  log += Math.log(ratio);
+  for (let k = 1; k < l; k++) {
+    ratio = (2 * k) / x + 1 / ratio;
+    log += Math.log(ratio);
+  }
+  return log;
+}
+
 // ---------------------------------------------------------------------------------------------
 // Zeros of J_n
 

@@ -15,3 +15,4 @@ export * from './fiber';
 export * from './lpModes';
 export * from './dispersion';
 export * from './bending';
+export * from './modeField';
