@@ -4,7 +4,7 @@
 // Gaussian beams, evaluated in closed form with complex Gaussian integrals; it is the same
 // physics as the general formula of Nemoto & Makimoto 1979 and reduces to each of Marcuse's
 // separate formulas when only one imperfection is present (the tests check that).
-import { InputError, requireNumber, requirePositive, requireWavelengthNm } from './errors';
+import { InputError, requireNumber, requireWavelengthNm } from './errors';
 
 /** Index of air for the gap. n = 1.00027 at 1550 nm and room conditions; 1.0 is common practice. */
 export const INDEX_AIR = 1.0;
@@ -27,6 +27,11 @@ export const MAX_GAP_UM = 5000;
 export const MAX_OFFSET_UM = 500;
 /** MFD range a single-mode fiber can have (µm). */
 const MFD_MAX_UM = 100;
+/**
+ * Smallest MFD accepted (µm): no guided mode is narrower than about half the wavelength (diffraction limit),
+ * and the shortest wavelength accepted is 200 nm. Also keeps w² far from underflow (a 5e-324 µm MFD gave NaN).
+ */
+export const MFD_MIN_UM = 0.1;
 
 export type JointCause = 'mismatch' | 'offset' | 'tilt' | 'gap' | 'fresnel';
 
@@ -110,8 +115,8 @@ interface Normalised {
 
 function normalise(input: GaussianJointInput): Normalised {
   if (input === null || typeof input !== 'object') throw new InputError('joint', input, 'an object with mfd1Um, mfd2Um, wavelengthNm');
-  const mfd1 = requirePositive('mfd1Um', input.mfd1Um, { max: MFD_MAX_UM, unit: 'µm' });
-  const mfd2 = requirePositive('mfd2Um', input.mfd2Um, { max: MFD_MAX_UM, unit: 'µm' });
+  const mfd1 = requireNumber('mfd1Um', input.mfd1Um, { min: MFD_MIN_UM, max: MFD_MAX_UM, unit: 'µm' });
+  const mfd2 = requireNumber('mfd2Um', input.mfd2Um, { min: MFD_MIN_UM, max: MFD_MAX_UM, unit: 'µm' });
   const lambdaNm = requireWavelengthNm('wavelengthNm', input.wavelengthNm);
   const d = requireNumber('lateralOffsetUm', input.lateralOffsetUm ?? 0, { min: 0, max: MAX_OFFSET_UM, unit: 'µm' });
   const tilt = requireNumber('tiltDeg', input.tiltDeg ?? 0, { min: -MAX_TILT_DEG, max: MAX_TILT_DEG, unit: '°', hint: 'the Gaussian model is paraxial' });
@@ -160,15 +165,15 @@ function lossFromLn(lnT: number): number {
 
 /** MFD mismatch alone: T = (2 w1 w2 / (w1² + w2²))² (Marcuse 1977, BSTJ 56(5), eq. 10 form; exact for Gaussians). */
 export function mfdMismatchLossDb(mfd1Um: number, mfd2Um: number): number {
-  const w1 = requirePositive('mfd1Um', mfd1Um, { max: MFD_MAX_UM, unit: 'µm' }) / 2;
-  const w2 = requirePositive('mfd2Um', mfd2Um, { max: MFD_MAX_UM, unit: 'µm' }) / 2;
+  const w1 = requireNumber('mfd1Um', mfd1Um, { min: MFD_MIN_UM, max: MFD_MAX_UM, unit: 'µm' }) / 2;
+  const w2 = requireNumber('mfd2Um', mfd2Um, { min: MFD_MIN_UM, max: MFD_MAX_UM, unit: 'µm' }) / 2;
   return lossFromLn(2 * Math.log((2 * w1 * w2) / (w1 * w1 + w2 * w2)));
 }
 
 /** Lateral offset alone (the mismatch factor kept apart): T = exp(−2 d² / (w1² + w2²)) (Marcuse 1977); equal fields: 4.34 (d/w)² dB. */
 export function lateralOffsetLossDb(mfd1Um: number, mfd2Um: number, lateralOffsetUm: number): number {
-  const w1 = requirePositive('mfd1Um', mfd1Um, { max: MFD_MAX_UM, unit: 'µm' }) / 2;
-  const w2 = requirePositive('mfd2Um', mfd2Um, { max: MFD_MAX_UM, unit: 'µm' }) / 2;
+  const w1 = requireNumber('mfd1Um', mfd1Um, { min: MFD_MIN_UM, max: MFD_MAX_UM, unit: 'µm' }) / 2;
+  const w2 = requireNumber('mfd2Um', mfd2Um, { min: MFD_MIN_UM, max: MFD_MAX_UM, unit: 'µm' }) / 2;
   const d = requireNumber('lateralOffsetUm', lateralOffsetUm, { min: 0, max: MAX_OFFSET_UM, unit: 'µm' });
   return lossFromLn((-2 * d * d) / (w1 * w1 + w2 * w2));
 }

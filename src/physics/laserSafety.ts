@@ -4,7 +4,7 @@
 // The hazard-level limits of IEC 60825-2 are not reproduced here: they were not available to check,
 // so the only number used is the class 3B upper limit (see CLASS_3B_UPPER_LIMIT_MW), and only to say
 // that a power is above it.
-import { requireNumber, requireWavelengthNm } from './errors';
+import { InputError, requireNumber, requireWavelengthNm } from './errors';
 import { dbmToMw, POWER_DBM_MAX, POWER_DBM_MIN } from './power';
 
 /** Hazard levels of IEC 60825-2:2021 (edition 4.0), assessed at each accessible location of a fiber system. */
@@ -110,6 +110,7 @@ function formatMw(mw: number): string {
 
 /** All the text of a context as plain lines, for a report. */
 export function hazardContextText(c: HazardContext): string {
+  if (!c || typeof c !== 'object' || !Array.isArray(c.cautions)) throw new InputError('context', c, 'a hazard context from laserHazardContext');
   return [
     `Laser hazard context at ${c.wavelengthNm} nm, ${c.powerDbm} dBm (${formatMw(c.powerMw)})`,
     c.wavelengthNote,

@@ -7,8 +7,8 @@
 // the backscatter level jumps up after the splice by more than the splice loss pulls it down: the trace
 // rises and the splice reads as a gain. From the other end the same step adds to the loss. The true loss
 // is the same both ways, so averaging the two directional readings cancels the backscatter step.
-import { requireNumber, requirePositive } from './errors';
-import { mfdMismatchLossDb } from './jointLoss';
+import { requireNumber } from './errors';
+import { MFD_MIN_UM, mfdMismatchLossDb } from './jointLoss';
 
 const MFD_MAX_UM = 100;
 /** Largest directional reading accepted (dB): anything beyond is a break, not a splice. */
@@ -49,10 +49,10 @@ export interface OtdrSpliceReading {
  * from B the sign flips (Hartog & Gold 1984, JLT 2(2); bidirectional averaging as in ITU-T G.650.3 (03/2008)).
  */
 export function otdrSpliceReading(input: OtdrSpliceInput): OtdrSpliceReading {
-  const mfdA = requirePositive('mfdAUm', input?.mfdAUm, { max: MFD_MAX_UM, unit: 'µm' });
-  const mfdB = requirePositive('mfdBUm', input?.mfdBUm, { max: MFD_MAX_UM, unit: 'µm' });
+  const mfdA = requireNumber('mfdAUm', input?.mfdAUm, { min: MFD_MIN_UM, max: MFD_MAX_UM, unit: 'µm' });
+  const mfdB = requireNumber('mfdBUm', input?.mfdBUm, { min: MFD_MIN_UM, max: MFD_MAX_UM, unit: 'µm' });
   const extra = requireNumber('extraLossDb', input?.extraLossDb ?? 0, { min: 0, max: MAX_OTDR_READING_DB, unit: 'dB' });
-  const rayleigh = requirePositive('rayleighRatioBA', input?.rayleighRatioBA ?? 1, { max: 10 });
+  const rayleigh = requireNumber('rayleighRatioBA', input?.rayleighRatioBA ?? 1, { min: 0.1, max: 10 }); // symmetric about 1; a subnormal ratio gave Infinity
   const mismatchLossDb = mfdMismatchLossDb(mfdA, mfdB);
   const trueLossDb = mismatchLossDb + extra;
   // S_A/S_B = (w_B/w_A)²; α_A/α_B = 1/rayleigh. Half of the round-trip dB shows on a one-way scale.

@@ -89,6 +89,19 @@ export function num(min: number, max: number, mix: NumberMix = {}): fc.Arbitrary
   return fc.oneof(...arbs) as fc.Arbitrary<number>;
 }
 
+/** Only in-range values (for the "all arguments valid" share of a multi-argument generator). */
+export function inRange(min: number, max: number): fc.Arbitrary<number> {
+  return num(min, max, { edge: 0, any: 0, junk: 0 });
+}
+
+/**
+ * With several arguments each mostly valid, the chance that all are valid at once shrinks fast; this mixes a
+ * share where every argument is in range (so the mathematics runs) with the fully hostile generator.
+ */
+export function mixValid<T>(valid: fc.Arbitrary<T>, hostile: fc.Arbitrary<T>, validWeight = 1, hostileWeight = 1): fc.Arbitrary<T> {
+  return fc.oneof({ arbitrary: valid, weight: validWeight }, { arbitrary: hostile, weight: hostileWeight });
+}
+
 /** An integer argument whose sensible range is [min, max]; the rest non-integers, edges and junk. */
 export function int(min: number, max: number, mix: NumberMix = {}): fc.Arbitrary<number> {
   const { valid = 6, edge = 2, any = 1, junk = 1 } = mix;
