@@ -1,4 +1,5 @@
-// Renders the committed PNG icons from the SVG sources in public/icons with Debian's
+// Renders the committed PNG icons from the SVG sources (public/icons/icon.svg, shipped, and
+// scripts/icons/icon-maskable.svg, source only) with Debian's
 // Chromium (playwright-core). Run by hand after changing an SVG: node scripts/make-icons.mjs
 // The PNGs are generated files: edit the SVGs, never the PNGs.
 import { readFileSync } from 'node:fs';
@@ -9,7 +10,7 @@ const iconsDir = fileURLToPath(new URL('../public/icons/', import.meta.url));
 const outputs = [
   { svg: 'icon.svg', png: 'icon-192.png', size: 192 },
   { svg: 'icon.svg', png: 'icon-512.png', size: 512 },
-  { svg: 'icon-maskable.svg', png: 'icon-maskable-512.png', size: 512 },
+  { svg: '../../scripts/icons/icon-maskable.svg', png: 'icon-maskable-512.png', size: 512 },
 ];
 
 const browser = await chromium.launch({
