@@ -389,6 +389,16 @@ export function linkBudget(input: LinkBudgetInput): LinkBudgetResult {
   }
   const rules = input.ruleSet;
   if (!rules || typeof rules.name !== 'string') throw new InputError('ruleSet', rules, 'a rule set such as TIA_568_3_D');
+  // A rule set built by hand (or read back from storage) must be whole: its sources are shown and its maxima used.
+  for (const key of ['id', 'source', 'connectorPairSource', 'spliceSource', 'splitterSource', 'fiberMaximaSource'] as const) {
+    if (typeof rules[key] !== 'string') throw new InputError(`ruleSet.${key}`, rules[key], 'a text');
+  }
+  if (!Array.isArray(rules.fiberMaxima)) throw new InputError('ruleSet.fiberMaxima', rules.fiberMaxima, 'a list of cable maxima (may be empty)');
+  rules.fiberMaxima.forEach((m, i) => {
+    requireClass(`ruleSet.fiberMaxima[${i}]`, m?.fiberClass);
+    requireWavelengthNm(`ruleSet.fiberMaxima[${i}].wavelengthNm`, m?.wavelengthNm);
+    requireNumber(`ruleSet.fiberMaxima[${i}].dbPerKm`, m?.dbPerKm, { min: 0, max: MAX_ELEMENT_LOSS_DB, unit: 'dB/km' });
+  });
   requireSpread('ruleSet.connectorPairDb', rules.connectorPairDb);
   requireSpread('ruleSet.spliceDb', rules.spliceDb);
   requireSpread('ruleSet.splitterExcessPerStageDb', rules.splitterExcessPerStageDb);
@@ -419,7 +429,7 @@ export function linkBudget(input: LinkBudgetInput): LinkBudgetResult {
       withMarginDb: maxDb + designMarginDb,
       costliest,
     };
-    const ei = equipment.findIndex((s) => Math.abs(s?.wavelengthNm - wavelengthNm) <= WINDOW_TOLERANCE_NM);
+    const ei = equipment.findIndex((s) => typeof s?.wavelengthNm === 'number' && Math.abs(s.wavelengthNm - wavelengthNm) <= WINDOW_TOLERANCE_NM);
     if (ei >= 0) budget.equipment = checkEquipment(equipment[ei]!, minDb, maxDb, designMarginDb, ei);
     return budget;
   });
@@ -437,6 +447,9 @@ export function linkBudget(input: LinkBudgetInput): LinkBudgetResult {
 
 /** Plain-text report of a budget, for pasting into a test record. */
 export function linkBudgetReport(result: LinkBudgetResult): string {
+  if (!result || typeof result !== 'object' || !Array.isArray(result.wavelengths) || !result.ruleSet) {
+    throw new InputError('result', result, 'a link budget from linkBudget');
+  }
   const lines: string[] = ['Link loss budget', `Rule set: ${result.ruleSet.name}`, `Design margin: ${fmt(result.designMarginDb)} dB`, ''];
   for (const w of result.wavelengths) {
     lines.push(`At ${w.wavelengthNm} nm`);

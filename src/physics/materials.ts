@@ -94,6 +94,11 @@ const NM_PER_UM = 1000;
 function requireGlassWavelength(glass: SellmeierGlass, wavelengthNm: number): number {
   const w = requireWavelengthNm('wavelengthNm', wavelengthNm);
   if (!glass || !Array.isArray(glass.terms)) throw new InputError('glass', glass, 'a Sellmeier glass such as FUSED_SILICA');
+  // Sellmeier oscillators have positive strengths and resonances; anything else is not a glass (and gave n' > 0, N < 1).
+  glass.terms.forEach((t, i) => {
+    requirePositive(`glass.terms[${i}].strength`, t?.strength);
+    requirePositive(`glass.terms[${i}].resonanceUm`, t?.resonanceUm);
+  });
   if (w < glass.validMinNm || w > glass.validMaxNm) {
     throw new ModelError(
       `${w} nm is outside ${glass.validMinNm}–${glass.validMaxNm} nm, where the Sellmeier coefficients for ${glass.name} are stated.`,
@@ -128,6 +133,10 @@ export function refractiveIndexDerivatives(glass: SellmeierGlass, wavelengthNm: 
   const n = Math.sqrt(f);
   const dn = f1 / (2 * n);
   const d2n = f2 / (2 * n) - (f1 * f1) / (4 * n * n * n);
+  // Huge strengths or a wavelength on a resonance overflow f or f1² even when f2 stays finite.
+  if (!Number.isFinite(n) || !Number.isFinite(d2n)) {
+    throw new ModelError(`The Sellmeier sum for ${glass.name} is too close to a resonance at ${wavelengthNm} nm.`, `Sellmeier (${glass.source})`);
+  }
   return { n, dnPerUm: dn, d2nPerUm2: d2n };
 }
 
@@ -139,7 +148,9 @@ export function refractiveIndex(glass: SellmeierGlass, wavelengthNm: number): nu
 /** Group index N = n − λ dn/dλ (definition of group velocity v_g = c/N). */
 export function groupIndex(glass: SellmeierGlass, wavelengthNm: number): number {
   const d = refractiveIndexDerivatives(glass, wavelengthNm);
-  return d.n - (wavelengthNm / NM_PER_UM) * d.dnPerUm;
+  const group = d.n - (wavelengthNm / NM_PER_UM) * d.dnPerUm;
+  if (!Number.isFinite(group)) throw new ModelError(`The group index of ${glass.name} overflows at ${wavelengthNm} nm.`, `Sellmeier (${glass.source})`);
+  return group;
 }
 
 /**
