@@ -60,6 +60,19 @@ async function openCalculatorFromHome(page: Page, id: string): Promise<void> {
   expect(await page.locator('main h2, main form, main input, main p').count()).toBeGreaterThan(0);
 }
 
+/** The number in a result line such as "1.9953 mW". */
+function numberIn(text: string | null): number {
+  const m = /[-−]?\d+(?:[.,]\d+)?(?:e[-+]?\d+)?/i.exec(text ?? '');
+  return m ? Number(m[0].replace('−', '-').replace(',', '.')) : NaN;
+}
+
+// The power calculator computes: 3 dBm typed in gives 10^0.3 mW = 1.9953 mW (definition of dBm).
+async function expectPowerCalculatorComputes(page: Page): Promise<void> {
+  await page.locator('#f-powerDbm').fill('3');
+  const mw = page.locator('section[aria-label="The same power in each unit"] dd').nth(1);
+  await expect.poll(async () => numberIn(await mw.textContent())).toBeCloseTo(1.9953, 3);
+}
+
 async function goOffline(p: FreshProfile, server: StaticServer): Promise<void> {
   await p.context.setOffline(true);
   // Also stop the server, so nothing but the service worker's cache can answer.
@@ -79,6 +92,7 @@ describe('the app works offline after one visit', () => {
     await p.page.reload();
     await expectHomeScreen(p.page);
     await openCalculatorFromHome(p.page, 'power');
+    await expectPowerCalculatorComputes(p.page);
     await p.page.goBack();
     await expectHomeScreen(p.page);
     await openCalculatorFromHome(p.page, 'single-mode');
@@ -121,6 +135,7 @@ describe('a new version is offered, never forced', () => {
     expect(await buildIdShown(p.page)).toBe(BUILDS.nextId);
     await expectHomeScreen(p.page);
     await openCalculatorFromHome(p.page, 'power');
+    await expectPowerCalculatorComputes(p.page);
   });
 
   it('declining keeps N, which still works offline', async () => {
@@ -134,6 +149,7 @@ describe('a new version is offered, never forced', () => {
     await expectHomeScreen(p.page);
     expect(await buildIdShown(p.page)).toBe(BUILDS.currentId);
     await openCalculatorFromHome(p.page, 'power');
+    await expectPowerCalculatorComputes(p.page);
   });
 });
 
