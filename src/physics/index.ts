@@ -16,3 +16,5 @@ export * from './lpModes';
 export * from './dispersion';
 export * from './bending';
 export * from './modeField';
+export * from './singleMode';
+export * from './equivalentStepIndex';
