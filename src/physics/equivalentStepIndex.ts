@@ -22,8 +22,8 @@ export const THEORETICAL_ABOVE_FIBER_CUTOFF_NM = 30;
  */
 export const CABLE_BELOW_FIBER_CUTOFF_NM = 50;
 /** MFD accepted, µm: far beyond any single-mode fiber at both ends. */
-export const MFD_MIN_UM = 1;
-export const MFD_MAX_UM = 50;
+export const LABEL_MFD_MIN_UM = 1;
+export const LABEL_MFD_MAX_UM = 50;
 /** NA range that looks like a real single-mode fiber (common practice); outside it we warn. */
 const TYPICAL_SM_NA_MIN = 0.08;
 const TYPICAL_SM_NA_MAX = 0.3;
@@ -69,12 +69,12 @@ export function equivalentStepIndex(input: EquivalentStepIndexInput): Equivalent
   const cutoffWavelengthNm = requireWavelengthNm('cutoffWavelengthNm', input?.cutoffWavelengthNm);
   const cutoffKind = requireCutoffKind(input?.cutoffKind);
   const mfdUm = requirePositive('mfdUm', input?.mfdUm, {
-    max: MFD_MAX_UM,
+    max: LABEL_MFD_MAX_UM,
     unit: 'µm',
-    hint: (x) => (x > MFD_MAX_UM && x < MFD_MAX_UM * 1000 ? `did you give it in nm? ${x} nm = ${x / 1000} µm` : undefined),
+    hint: (x) => (x > LABEL_MFD_MAX_UM && x < LABEL_MFD_MAX_UM * 1000 ? `did you give it in nm? ${x} nm = ${x / 1000} µm` : undefined),
   });
-  if (mfdUm < MFD_MIN_UM) {
-    throw new InputError('mfdUm', mfdUm, `a number from ${MFD_MIN_UM} to ${MFD_MAX_UM} µm`, 'single-mode fibers have MFDs of about 4 to 12 µm; check the unit');
+  if (mfdUm < LABEL_MFD_MIN_UM) {
+    throw new InputError('mfdUm', mfdUm, `a number from ${LABEL_MFD_MIN_UM} to ${LABEL_MFD_MAX_UM} µm`, 'single-mode fibers have MFDs of about 4 to 12 µm; check the unit');
   }
   const mfdWavelengthNm = requireWavelengthNm('mfdWavelengthNm', input?.mfdWavelengthNm);
   const notes: string[] = [];
