@@ -2,7 +2,7 @@
 // diameter at a reference wavelength; the mode engine (P1, src/physics/equivalentStepIndex.ts)
 // infers the equivalent step-index core radius and NA that reproduce both. This module only adapts
 // that result for the fiber library and adds the label-consistency warnings the library shows.
-import { ModelError } from '../physics/errors';
+import { equivalentStepIndex } from '../physics';
 
 export interface LabelValues {
   cutoffWavelengthNm: number;
@@ -22,10 +22,8 @@ export interface DerivedStepIndex {
   warnings: string[];
 }
 
-/** Replaced by the mode engine's equivalentStepIndex as soon as it is in the tree. */
-export function deriveStepIndex(_label: LabelValues): DerivedStepIndex {
-  throw new ModelError(
-    'Label values cannot be turned into a fiber yet: the mode engine’s label conversion is still being built. Use a multimode class or type the core diameter and NA.',
-    'equivalent step-index from label',
-  );
+/** The mode engine's fit (P1, equivalentStepIndex): cutoff + MFD → equivalent step-index a and NA. */
+export function deriveStepIndex(label: LabelValues): DerivedStepIndex {
+  const r = equivalentStepIndex(label);
+  return { coreRadiusUm: r.coreRadiusUm, na: r.na, notes: r.notes, warnings: r.warnings };
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { CATEGORY_PRESETS, findPreset, presetsOfKinds, type CategoryPreset, type Sourced } from '../../src/fibers/presets';
-import { resolvePreset, resolveSaved, resolveTyped } from '../../src/fibers/resolve';
+import { resolveLabel, resolvePreset, resolveSaved, resolveTyped } from '../../src/fibers/resolve';
+import { modeFieldDiameterUm } from '../../src/physics';
 import { InputError } from '../../src/physics/errors';
 import { record, stepInput } from './helpers';
 
@@ -92,5 +93,34 @@ describe('typed and saved fibers', () => {
   it('a saved type keeps its name, attenuation and category', () => {
     const f = resolveSaved(record({ id: 'ft_s' }, stepInput({ name: 'Yard 4', category: 'G.652.D' })));
     expect(f).toMatchObject({ name: 'Yard 4', category: 'G.652.D', attenuationDbPerKm: [{ wavelengthNm: 1310, dbPerKm: 0.35 }, { wavelengthNm: 1550, dbPerKm: 0.21 }] });
+  });
+});
+
+describe('single-mode categories and labels through the mode engine', () => {
+  it.each(['G.652.D', 'G.654.E', 'G.655.D', 'G.657.A1', 'G.657.A2', 'G.657.B2', 'G.657.B3'])(
+    '%s resolves to an equivalent step-index fiber whose Petermann II MFD is the category MFD',
+    (cat) => {
+      const p = findPreset(cat)!;
+      const f = resolvePreset(p);
+      expect(f).toMatchObject({ origin: 'category', profile: 'step', category: cat, cutoffKind: 'cable', cutoffWavelengthNm: p.cutoffWavelengthNm!.value });
+      // Independent check through the mode engine's exact-field MFD (ITU-T G.650.1 Petermann II); 1e-3 relative covers its quadrature.
+      const mfd = modeFieldDiameterUm({ coreRadiusUm: f.coreRadiusUm, na: f.na, wavelengthNm: p.mfdWavelengthNm!, definition: 'petermann2' }).mfdUm;
+      expect(Math.abs(mfd / p.mfdUm!.value - 1), `${cat}: MFD ${mfd} vs ${p.mfdUm!.value}`).toBeLessThan(1e-3);
+      // Plausible single-mode geometry (common practice): NA 0.08–0.3, core diameter 5–14 µm.
+      expect(f.na).toBeGreaterThan(0.08);
+      expect(f.na).toBeLessThan(0.3);
+      expect(2 * f.coreRadiusUm).toBeGreaterThan(5);
+      expect(2 * f.coreRadiusUm).toBeLessThan(14);
+    },
+  );
+
+  it('label values that do not sit together give a warning in the notes', () => {
+    // MFD quoted at 1200 nm, below the 1260 nm cutoff: not single-mode there.
+    const f = resolveLabel({ cutoffWavelengthNm: 1260, cutoffKind: 'cable', mfdUm: 9.2, mfdWavelengthNm: 1200 });
+    expect(f.notes.some((n) => n.startsWith('Warning:'))).toBe(true);
+  });
+
+  it('impossible label values are refused with a reason, not a number', () => {
+    expect(() => resolveLabel({ cutoffWavelengthNm: 1260, cutoffKind: 'cable', mfdUm: 1.2, mfdWavelengthNm: 1550 })).toThrow(/step-index|NA/);
   });
 });
