@@ -1,7 +1,14 @@
 // Every task the compute worker can run, merged from the features that need one.
 // A task is a pure function of structured-cloneable input (it calls physics only).
 // Add one spread line per feature: `...launchTasks,` with its import above.
+import { tasks as jointLossTasks } from './jointLoss/tasks';
+import { tasks as bendLossTasks } from './bendLoss/tasks';
+import { tasks as launchTasks } from './launch/tasks';
+
 export type Task = (input: never) => unknown;
 
 export const TASKS: Record<string, Task> = {
+  ...jointLossTasks,
+  ...bendLossTasks,
+  ...launchTasks,
 };
