@@ -263,3 +263,22 @@ export function lpModes(v: number): LPMode[] {
 export function totalModeCount(modes: readonly LPMode[]): number {
   return modes.reduce((sum, mode) => sum + mode.degeneracy, 0);
 }
+
+/**
+ * b(V) of LP_lm sampled on (cutoffV, vMax] for a b–V diagram: `samples` points spaced evenly
+ * in V from just above the cutoff (where b → 0) to vMax. Empty when vMax ≤ cutoffV.
+ */
+export function lpBvCurve(l: number, m: number, vMax: number, samples = 100): [v: number, b: number][] {
+  requireInteger('samples', samples, 2, 10000);
+  const cutoffV = lpCutoffV(l, m);
+  requireV(vMax);
+  const vStart = Math.max(cutoffV, LP_MIN_V);
+  if (vMax <= vStart) return [];
+  const points: [number, number][] = [];
+  if (cutoffV > 0) points.push([cutoffV, 0]);
+  for (let i = 1; i <= samples; i++) {
+    const v = vStart + ((vMax - vStart) * i) / samples;
+    points.push([v, solveLpMode(l, m, v).b]);
+  }
+  return points;
+}

@@ -48,6 +48,32 @@ function fieldUnchecked(l: number, u: number, w: number, rho: number): number {
 }
 
 /**
+ * Intensity |ψ|² of LP_lm over a square of side 2·extentOverA core radii, centred on the axis,
+ * on a cells × cells grid (row-major, top row first, y up), normalized to a maximum of 1:
+ * ψ = F(r) cos(lφ) with F from lpFieldAt (the even member of the cos/sin pair).
+ */
+export function lpIntensityGrid(mode: LPMode, cells: number, extentOverA: number): number[] {
+  const { l, u, w } = requireMode(mode);
+  const n = requireInteger('cells', cells, 2, 400);
+  const extent = requirePositive('extentOverA', extentOverA, { max: 100 });
+  const values: number[] = new Array(n * n);
+  let max = 0;
+  for (let row = 0; row < n; row++) {
+    const y = extent * (1 - (2 * (row + 0.5)) / n);
+    for (let col = 0; col < n; col++) {
+      const x = extent * ((2 * (col + 0.5)) / n - 1);
+      const r = Math.hypot(x, y);
+      const amplitude = fieldUnchecked(l, u, w, r) * (l === 0 ? 1 : Math.cos(l * Math.atan2(y, x)));
+      const intensity = amplitude * amplitude;
+      values[row * n + col] = intensity;
+      if (intensity > max) max = intensity;
+    }
+  }
+  if (max > 0) for (let i = 0; i < values.length; i++) values[i] /= max;
+  return values;
+}
+
+/**
  * Sampled LP01 radial field E(r)/E(0) at V = v, inside and outside the core, for plots.
  * Defaults: 241 samples from r = 0 to 3a.
  */

@@ -239,3 +239,17 @@ describe('bad input is refused with a typed error', () => {
     expect(() => solveLpMode(1, 1, 2.0)).toThrow(/LP11 is not guided at V = 2: it is cut off at V = 2.4048/);
   });
 });
+
+describe('b–V curves for the diagram', () => {
+  it('LP11 rises from b = 0 at its cutoff V = 2.405 and grows with V', async () => {
+    const { lpBvCurve } = await import('../../src/physics/lpModes');
+    const curve = lpBvCurve(1, 1, 6, 50);
+    expect(curve[0]).toEqual([LP11_CUTOFF_V, 0]);
+    for (let i = 1; i < curve.length; i++) expect(curve[i][1]).toBeGreaterThan(curve[i - 1][1]);
+    expect(curve.at(-1)?.[0]).toBe(6);
+  });
+  it('is empty below the cutoff', async () => {
+    const { lpBvCurve } = await import('../../src/physics/lpModes');
+    expect(lpBvCurve(0, 2, 3)).toEqual([]);
+  });
+});

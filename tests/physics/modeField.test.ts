@@ -157,3 +157,29 @@ describe('bad input is refused with a typed error', () => {
     expect(call).toThrow(InputError);
   });
 });
+
+describe('the LP intensity picture', () => {
+  it('LP01 is brightest on the axis and round: equal at equal radii', async () => {
+    const { lpIntensityGrid } = await import('../../src/physics/modeField');
+    const cells = 21;
+    const grid = lpIntensityGrid(solveLpMode(0, 1, 2.2), cells, 1.5);
+    const centre = grid[10 * cells + 10];
+    expect(centre).toBe(1);
+    expect(grid[10 * cells + 15]).toBeCloseTo(grid[15 * cells + 10], 12); // right vs below
+    expect(grid[10 * cells + 20]).toBeLessThan(grid[10 * cells + 15]);
+  });
+  it('LP11 (cos φ) has two lobes and a dark line through the axis along y', async () => {
+    const { lpIntensityGrid } = await import('../../src/physics/modeField');
+    const cells = 20; // even, so no cell sits on the axis
+    const grid = lpIntensityGrid(solveLpMode(1, 1, 3.5), cells, 1.5);
+    const at = (row: number, col: number) => grid[row * cells + col];
+    expect(Math.max(...grid)).toBe(1);
+    expect(at(9, 3)).toBeGreaterThan(0.3); // left lobe on the x axis
+    expect(at(9, 16)).toBeCloseTo(at(9, 3), 12); // mirror image
+    expect(at(2, 9)).toBeLessThan(0.01 * at(9, 3)); // on the y axis: cos φ ≈ 0
+  });
+  it('refuses a picture too fine for a phone', async () => {
+    const { lpIntensityGrid } = await import('../../src/physics/modeField');
+    expect(() => lpIntensityGrid(solveLpMode(0, 1, 2), 1000, 1.5)).toThrow(InputError);
+  });
+});
