@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { gradedIndexProfile, InputError, solveRadialModes, stepIndexProfile } from '../../src/physics';
+import { gradedIndexProfile, InputError, lpModes, solveRadialModes, stepIndexProfile } from '../../src/physics';
 import fixture from '../fixtures/radialSolver/stepModes.json';
 
 const LAMBDA_NM = 1000;
@@ -26,6 +26,19 @@ describe('a step profile solved by finite differences agrees with the Bessel-fun
       const got = s.modes.find((m) => m.l === ref.l && m.m === ref.m);
       near(got?.b ?? Number.NaN, ref.b, 3e-3, `LP${ref.l}${ref.m} at V = ${v}`);
     }
+  });
+
+  // The same check against the project's own Bessel-function solution (Gloge 1971, src/physics/lpModes.ts),
+  // at V values between the fixture's, same 3e-3 tolerance and reasoning.
+  it.each([3.1, 7.7, 18.5])('V = %s: same modes and b (within 3e-3) as the Bessel-function LP solution', (v) => {
+    const s = solveRadialModes(stepFiberFor(v), LAMBDA_NM);
+    const exact = lpModes(v).filter((m) => m.b > 1e-3);
+    for (const ref of exact) {
+      const got = s.modes.find((m) => m.l === ref.l && m.m === ref.m);
+      near(got?.b ?? Number.NaN, ref.b, 3e-3, `LP${ref.l}${ref.m} at V = ${v}`);
+    }
+    expect(s.modes.length).toBeGreaterThanOrEqual(exact.length);
+    expect(s.modes.length).toBeLessThanOrEqual(lpModes(v).length);
   });
 
   it('the error falls as h² (second-order scheme): doubling the cells cuts it at least three times', () => {
