@@ -193,6 +193,26 @@ describe('identities (property tests)', () => {
     );
   });
 
+  it('Wronskian I_n K_{n+1} + I_{n+1} K_n = 1/x (A&S 9.6.15), with I_n from its power series (A&S 9.6.10), to 1e-13', () => {
+    // The series for I_n has only positive terms, so it is accurate to rounding for x ≤ 20.
+    const besselI = (n: number, x: number) => {
+      let term = Math.pow(x / 2, n);
+      for (let k = 1; k <= n; k++) term /= k;
+      let sum = term;
+      for (let k = 1; k < 200 && term > 1e-18 * sum; k++) {
+        term *= (x * x) / 4 / (k * (n + k));
+        sum += term;
+      }
+      return sum;
+    };
+    fc.assert(
+      fc.property(fc.integer({ min: 0, max: 10 }), fc.double({ min: 0.05, max: 20, noNaN: true }), (n, x) => {
+        const w = besselI(n, x) * besselK(n + 1, x) + besselI(n + 1, x) * besselK(n, x);
+        expectClose(`Wronskian at n = ${n}, x = ${x}`, w * x, 1, 1e-13);
+      }),
+    );
+  });
+
   it('K_n is positive, falls with x and grows with n (A&S 9.6.1, 9.6.26)', () => {
     // n ≤ 60 keeps K_n(0.01) ≈ 1e218 inside the float64 range, x ≤ 500 keeps K_0 above underflow.
     fc.assert(

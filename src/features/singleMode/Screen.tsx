@@ -1,4 +1,210 @@
-// PLACEHOLDER: replaced by the issue that builds this calculator. Must not survive to a release.
+// Single-mode check: is this fiber single-mode at this wavelength? V-number, verdict, distance to the
+// LP11 cutoff, the guided LP modes with their vector families, a b–V diagram and a mode picture.
+import { useState } from 'preact/hooks';
+import { NumberField } from '../../ui/NumberField';
+import { need, useQuantity } from '../../ui/useQuantity';
+import { useResult } from '../../ui/useResult';
+import { ResultCard } from '../../ui/ResultCard';
+import { HowComputed } from '../../ui/HowComputed';
+import { LinePlot } from '../../ui/Plot';
+import { formatNumber } from '../../ui/format';
+import { reportText } from '../../ui/copyText';
+import { useFiberPicker } from '../../ui/FiberPicker';
+import { InputError, LP11_CUTOFF_V, lpBvCurve, lpCutoffV, singleModeCheck, type LPMode } from '../../physics';
+import { ModePicture } from './ModePicture';
+
+const QUICK_WAVELENGTHS_NM = [850, 1300, 1310, 1490, 1550, 1625];
+/** LP families drawn on the b–V diagram: the first five to appear as V grows (one line style each). */
+const DIAGRAM_FAMILIES: [number, number][] = [[0, 1], [1, 1], [2, 1], [0, 2], [3, 1]];
+/** The mode table lists this many modes; the rest are counted. */
+const TABLE_ROWS = 40;
+
+const name = (m: { l: number; m: number }) => `LP${m.l}${m.m}`;
+
 export default function Screen() {
-  return <p>This calculator is being built.</p>;
+  const picker = useFiberPicker({ id: 'single-mode', label: 'Fiber type', kinds: ['single-mode', 'multimode'], defaultCategory: 'G.652.D' });
+  const wavelength = useQuantity('wavelengthNm', 'wavelength', '1310');
+  const [chosen, setChosen] = useState<string>('');
+  const fiber = picker.fiber;
+
+  const state = useResult(() => {
+    if (!fiber) throw new InputError('fiber', undefined, 'a fiber type', picker.error ?? 'pick a fiber type');
+    const wavelengthNm = need(wavelength);
+    return { ...singleModeCheck({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, wavelengthNm }), wavelengthNm };
+  }, [fiber, picker.error, wavelength.text]);
+  const calc = { error: state.error, errorArgument: state.errorArgument };
+  const r = state.result;
+
+  const vMax = r ? Math.max(6, Math.min(r.v * 1.3, 12)) : 6;
+  const diagram = useResult(
+    () => DIAGRAM_FAMILIES.map(([l, m]) => ({ name: `LP${l}${m}`, points: lpBvCurve(l, m, vMax, 80) })).filter((s) => s.points.length > 1),
+    [vMax],
+  );
+
+  const shown: LPMode | undefined = r && (r.modes.find((m) => name(m) === chosen) ?? r.modes.find((m) => m.l === 1 && m.m === 1) ?? r.modes[0]);
+  const labelCutoff = fiber?.cutoffWavelengthNm;
+  // The label's measured cutoff decides in practice: above it LP11 is stripped within metres,
+  // even where the equivalent step-index model still guides it weakly.
+  const verdict = !r
+    ? { css: '', words: '', practical: false }
+    : r.singleMode
+      ? { css: 'verdict-ok', words: 'Single-mode: only LP01 is guided', practical: false }
+      : labelCutoff !== undefined && r.wavelengthNm > labelCutoff
+        ? { css: 'verdict-ok', words: 'Single-mode in practice: above the cutoff on the label', practical: true }
+        : { css: 'verdict-warn', words: `Not single-mode: ${r.lpModeCount} LP modes are guided`, practical: false };
+
+  const copy =
+    r &&
+    fiber &&
+    !state.stale &&
+    reportText({
+      title: 'Single-mode check',
+      inputs: [
+        ['Fiber type', fiber.name],
+        ['Core radius (equivalent step index)', `${formatNumber(fiber.coreRadiusUm, 4)} µm`],
+        ['NA', formatNumber(r.na, 4)],
+        ['Wavelength', `${formatNumber(r.wavelengthNm, 6)} nm`],
+      ],
+      outputs: [
+        ['V-number', formatNumber(r.v, 4)],
+        ['Verdict', verdict.words],
+        ['Theoretical LP11 cutoff wavelength', `${formatNumber(r.lp11CutoffWavelengthNm, 5)} nm`],
+        ['Guided LP modes', `${r.lpModeCount} (${r.modes.slice(0, 12).map(name).join(', ')}${r.lpModeCount > 12 ? ', …' : ''})`],
+        ['Vector mode families', String(r.vectorFamilyCount)],
+        ['All modes with degeneracy', String(r.totalModeCount)],
+        ['Summary', r.summary],
+      ],
+      assumptions: ['Weakly guiding step-index fiber, LP modes (Gloge 1971); single-mode below V = 2.405.', ...fiber.notes],
+    });
+
+  return (
+    <>
+      <h2>Fiber and wavelength</h2>
+      {picker.element}
+      <div class="form">
+        <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={QUICK_WAVELENGTHS_NM} calc={calc} />
+      </div>
+
+      <ResultCard title="Single-mode check" stale={state.stale} error={state.error} copyText={copy || undefined}>
+        {r && (
+          <>
+            <p class={verdict.css}>{verdict.words}</p>
+            {verdict.practical && (
+              <p>
+                The label's {fiber?.cutoffKind === 'cable' ? 'cable' : 'fiber'} cutoff ({labelCutoff} nm) is below {formatNumber(r.wavelengthNm, 6)} nm. In theory higher modes are
+                still guided here, but so weakly (LP11: b = {formatNumber(r.modes[1]?.b, 2)}) that they are lost within metres; that is what a measured cutoff means.
+              </p>
+            )}
+            <p>{verdict.practical ? `In theory (step-index model): ${r.summary}` : r.summary}</p>
+            <dl class="kv">
+              <dt>V-number</dt>
+              <dd class="big">{formatNumber(r.v, 4)}</dd>
+              <dt>Distance to the LP11 cutoff</dt>
+              <dd>
+                {r.relativeDistanceToCutoff <= 0 ? `${formatNumber(-r.relativeDistanceToCutoff * 100, 3)} % below` : `${formatNumber(r.relativeDistanceToCutoff * 100, 3)} % above`} V = 2.405
+                {' '}({formatNumber(Math.abs(r.wavelengthMarginNm), 4)} nm {r.wavelengthMarginNm >= 0 ? 'above' : 'below'} the cutoff wavelength)
+              </dd>
+              <dt>Theoretical LP11 cutoff wavelength</dt>
+              <dd>{formatNumber(r.lp11CutoffWavelengthNm, 5)} nm</dd>
+              {labelCutoff !== undefined && (
+                <>
+                  <dt>Cutoff on the label</dt>
+                  <dd>
+                    {labelCutoff} nm ({fiber?.cutoffKind === 'cable' ? 'cable cutoff' : 'fiber cutoff'}): a measured cutoff, below the theoretical one.
+                    {r.wavelengthNm > labelCutoff ? ' Above it, the fiber counts as single-mode in practice.' : ' At or below it, LP11 can carry light.'}
+                  </dd>
+                </>
+              )}
+              <dt>Counts</dt>
+              <dd>
+                {r.lpModeCount} LP mode{r.lpModeCount === 1 ? '' : 's'}, {r.vectorFamilyCount} vector mode famil{r.vectorFamilyCount === 1 ? 'y' : 'ies'}, {r.totalModeCount} modes with both polarizations and orientations
+              </dd>
+            </dl>
+            {fiber?.profile === 'graded' && (
+              <p class="note">
+                This fiber has a graded core; the check treats it as step index with the same core and NA. A parabolic core guides about half as many modes (Gloge &amp; Marcatili 1973).
+              </p>
+            )}
+            <div class="table-wrap">
+              <table>
+                <caption class="note">Guided modes, most tightly bound first</caption>
+                <thead>
+                  <tr>
+                    <th scope="col">LP mode</th>
+                    <th scope="col">Exact modes it stands for</th>
+                    <th scope="col">b</th>
+                    <th scope="col">Cutoff V</th>
+                    <th scope="col">Modes</th>
+                  </tr>
+                </thead>
+                <tbody>
+                  {r.modes.slice(0, TABLE_ROWS).map((m) => (
+                    <tr key={name(m)}>
+                      <td>{name(m)}</td>
+                      <td>{m.vectorModes.join(', ')}</td>
+                      <td>{formatNumber(m.b, 4)}{m.nearCutoff ? ' (at cutoff)' : ''}</td>
+                      <td>{m.cutoffV === 0 ? 'none' : formatNumber(m.cutoffV, 5)}</td>
+                      <td>{m.degeneracy}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+              {r.modes.length > TABLE_ROWS && <p class="note">… and {r.modes.length - TABLE_ROWS} more LP modes.</p>}
+            </div>
+          </>
+        )}
+      </ResultCard>
+
+      <ResultCard title="Where this fiber sits: the b–V diagram" stale={state.stale || diagram.stale} error={diagram.error}>
+        {r && diagram.result && (
+          <>
+            <LinePlot
+              title="Normalized propagation constant b of the first LP modes against V"
+              xLabel="V-number"
+              yLabel="b"
+              xRange={[0, vMax]}
+              yRange={[0, 1]}
+              series={diagram.result}
+              markers={[
+                { x: r.v, label: `this fiber: V = ${formatNumber(r.v, 3)}` },
+                { x: LP11_CUTOFF_V, label: 'LP11 cutoff 2.405' },
+                { x: lpCutoffV(2, 1), label: 'LP21, LP02 cutoff 3.832' },
+              ]}
+              points={r.modes.filter((m) => DIAGRAM_FAMILIES.some(([l, mm]) => l === m.l && mm === m.m)).map((m) => ({ x: r.v, y: m.b, label: name(m) }))}
+            />
+            <p class="note">Each curve starts at its cutoff (b = 0) and rises toward 1 as V grows; a mode is guided when its curve starts left of the V marker.</p>
+          </>
+        )}
+      </ResultCard>
+
+      <ResultCard title="What a mode looks like across the core" stale={state.stale}>
+        {r && shown && (
+          <>
+            <div class="form">
+              <div class="field">
+                <label for="sm-mode">Mode to show</label>
+                <select id="sm-mode" value={name(shown)} onChange={(e) => setChosen((e.currentTarget as HTMLSelectElement).value)}>
+                  {r.modes.slice(0, TABLE_ROWS).map((m) => (
+                    <option key={name(m)} value={name(m)}>{name(m)} ({m.vectorModes.join(', ')})</option>
+                  ))}
+                </select>
+              </div>
+            </div>
+            <ModePicture mode={shown} />
+          </>
+        )}
+      </ResultCard>
+
+      <HowComputed
+        formula="V = 2π a NA / λ; LP modes from u J_{l−1}(u)/J_l(u) = −w K_{l−1}(w)/K_l(w), u² + w² = V², b = w²/V²; LP_lm is cut off where J_{l−1}(V) = 0"
+        source="Gloge 1971 (weakly guiding fibers); Bessel functions and zeros checked against Abramowitz & Stegun Tables 9.1, 9.5, 9.8"
+        assumptions={[
+          'Step-index core of radius a; a fiber type given by its label is replaced by its equivalent step-index core.',
+          'Weak guidance (core and cladding indices close): modes are grouped into LP modes.',
+          'Single-mode below V = 2.405, the first zero of J₀ (common practice).',
+        ]}
+        validity="V from 0.1 to 300. Below V ≈ 1 the single mode spreads far into the cladding and bends easily strip it."
+      />
+    </>
+  );
 }
