@@ -89,6 +89,53 @@ describe('keyboard alone', () => {
   });
 });
 
+describe('keyboard alone, a fiber check', () => {
+  it('on the single-mode check: pick typed fiber values, enter core and NA, then a wavelength, and read V and the verdict', async () => {
+    const page = await context.newPage();
+    await page.goto(server.url);
+    await page.locator('main h1').waitFor();
+    const stops = await tabUntil(page, (f) => f.href === '#/single-mode');
+    await page.keyboard.press('Enter');
+    await waitForScreen(page);
+
+    stops.push(...(await tabUntil(page, (f) => f.id === 'single-mode-source')));
+    // A closed <select> takes type-ahead: "Typed values (core diameter and NA)".
+    await page.keyboard.type('Typed');
+    await expect.poll(() => page.locator('#single-mode-source').inputValue()).toBe('typed');
+
+    const coreDiameterUm = 8.2;
+    const na = 0.14;
+    for (const [id, value] of [
+      ['f-single-mode-coreDiameterUm', String(coreDiameterUm)],
+      ['f-single-mode-na', String(na)],
+      ['f-wavelengthNm', '1550'],
+    ] as const) {
+      stops.push(...(await tabUntil(page, (f) => f.id === id)));
+      await page.keyboard.press('Control+A');
+      await page.keyboard.type(value);
+    }
+    const card = page.locator('section[aria-label="Single-mode check"]');
+    // V = 2π a NA / λ (Gloge 1971, eq. for the normalized frequency); shown to 4 significant figures.
+    const vAt = (wavelengthNm: number) => (2 * Math.PI * (coreDiameterUm / 2) * na) / (wavelengthNm / 1000);
+    await expect.poll(async () => numberIn(await card.locator('dd.big').textContent())).toBeCloseTo(vAt(1550), 3);
+    // Below V = 2.405 (first zero of J0, A&S Table 9.5) only LP01 is guided.
+    expect(vAt(1550)).toBeLessThan(2.405);
+    await expect.poll(() => card.locator('.verdict-ok').textContent()).toMatch(/only LP01/);
+
+    stops.push(...(await tabUntil(page, (f) => f.name === '1310 nm')));
+    await page.keyboard.press('Space');
+    // 2.405 < V < 3.832 (first zero of J1, A&S Table 9.5): LP01 and LP11, two LP modes.
+    expect(vAt(1310)).toBeGreaterThan(2.405);
+    expect(vAt(1310)).toBeLessThan(3.832);
+    await expect.poll(async () => numberIn(await card.locator('dd.big').textContent())).toBeCloseTo(vAt(1310), 3);
+    await expect.poll(() => card.locator('.verdict-warn').textContent()).toMatch(/2 LP modes/);
+
+    const unringed = stops.filter((s) => !s.visibleFocus).map((s) => s.what);
+    expect(unringed, 'every keyboard stop shows a focus ring').toEqual([]);
+    await page.close();
+  });
+});
+
 describe('typed units', () => {
   it.for(FEATURES.map((f) => ({ id: f.id, title: f.title })))(
     'on the $title screen, a wavelength typed as "1,55 µm" is read as 1550 nm and gives the same result as 1550',
