@@ -58,12 +58,22 @@ async function horizontalOverflow(page: Page): Promise<Overflow> {
   return page.evaluate(() => {
     const root = document.documentElement;
     const clientWidth = root.clientWidth;
-    const widest = [...document.querySelectorAll('body *')]
-      .map((el) => ({ el, right: el.getBoundingClientRect().right }))
-      .filter((x) => x.right > clientWidth + 0.5)
-      .slice(0, 5)
-      .map(({ el, right }) => `${el.tagName.toLowerCase()}${el.id ? '#' + el.id : ''}${el.className && typeof el.className === 'string' ? '.' + el.className.trim().split(/\s+/).join('.') : ''} ends at ${right.toFixed(0)} px`);
-    return { scrollWidth: root.scrollWidth, clientWidth, widest };
+    const describe = (el: Element) =>
+      `${el.tagName.toLowerCase()}${el.id ? '#' + el.id : ''}${el.className && typeof el.className === 'string' ? '.' + el.className.trim().split(/\s+/).join('.') : ''}`;
+    const widest: string[] = [];
+    for (const el of document.querySelectorAll('body *')) {
+      const right = el.getBoundingClientRect().right;
+      if (right > clientWidth + 0.5) widest.push(`${describe(el)} ends at ${right.toFixed(0)} px`);
+    }
+    // Text that does not wrap (a long word or number) sticks out of its box without the box growing.
+    const walker = document.createTreeWalker(document.body, NodeFilter.SHOW_TEXT);
+    const range = document.createRange();
+    for (let n = walker.nextNode(); n; n = walker.nextNode()) {
+      range.selectNodeContents(n);
+      const right = range.getBoundingClientRect().right;
+      if (right > clientWidth + 0.5) widest.push(`text "${(n.textContent ?? '').trim().slice(0, 40)}" in ${describe(n.parentElement!)} ends at ${right.toFixed(0)} px`);
+    }
+    return { scrollWidth: root.scrollWidth, clientWidth, widest: widest.slice(0, 6) };
   });
 }
 
