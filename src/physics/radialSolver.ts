@@ -32,6 +32,7 @@ export function gradedIndexProfile(opts: { coreRadiusUm: number; na: number; alp
   const alpha = requireNumber('alpha', opts?.alpha, { min: 0.5, max: 1000 });
   const n2 = requireNumber('claddingIndex', opts?.claddingIndex ?? SILICA_INDEX_850NM, { min: 1, max: 4 });
   const n1sq = n2 * n2 + na * na;
+  requireGuiding(na, n1sq, n2);
   const twoDelta = (na * na) / n1sq;
   return {
     name: `graded-index α = ${alpha}`,
@@ -42,12 +43,18 @@ export function gradedIndexProfile(opts: { coreRadiusUm: number; na: number; alp
   };
 }
 
+/** An NA so small that n1 rounds to n2 (NA ≲ 1e-8) describes no guide at all. */
+function requireGuiding(na: number, n1sq: number, n2: number): void {
+  if (!(Math.sqrt(n1sq) > n2)) throw new InputError('na', na, 'an NA large enough to raise the core index above the cladding index', 'fibers have NA from about 0.05 to 0.5');
+}
+
 /** Step profile with n1² − n2² = NA². */
 export function stepIndexProfile(opts: { coreRadiusUm: number; na: number; claddingIndex?: number }): IndexProfile {
   const a = requirePositive('coreRadiusUm', opts?.coreRadiusUm, { max: 500, unit: 'µm' });
   const na = requirePositive('na', opts?.na, { max: 0.5 });
   const n2 = requireNumber('claddingIndex', opts?.claddingIndex ?? SILICA_INDEX_850NM, { min: 1, max: 4 });
   const n1 = Math.sqrt(n2 * n2 + na * na);
+  requireGuiding(na, n1 * n1, n2);
   return { name: 'step-index', coreRadiusUm: a, coreIndex: n1, claddingIndex: n2, indexAt: (r) => (r < a ? n1 : n2) };
 }
 
@@ -106,6 +113,12 @@ const GRID_B_ACCURACY_FACTOR = 0.2;
 /** Most cells the solver will take (memory/time guard: 6000 cells ≈ 50 kB per mode). */
 const MAX_CELLS = 6000;
 /**
+ * Largest V solved (time/memory guard). Cost grows about as V^3: measured on a 2-core test machine, about 0.9 s
+ * at V = 120 (step or α = 2) and 11 s with 300 MB of fields at V = 314 (MAX_CELLS alone allowed V ≈ 600,
+ * ~45 000 modes, GBs). V = 120 still covers every OM-class fiber (50/62.5 µm, NA ≤ 0.275) from 600 nm up.
+ */
+export const MAX_SOLVER_V = 120;
+/**
  * Bisection stops at this relative width of the guided β² range; the eigenvalue is then refined by the
  * Rayleigh quotient of the inverse-iteration vector, whose error is the square of the vector's (Parlett 1998, §4.6).
  */
@@ -162,9 +175,16 @@ export function solveRadialModes(profile: IndexProfile, wavelengthNm: number, op
   const nCo = requireNumber('profile.coreIndex', profile.coreIndex, { min: nCl, minInclusive: false, max: 4 });
   const k = (2 * Math.PI) / (lambdaNm / 1000);
   const v = k * a * Math.sqrt(nCo * nCo - nCl * nCl);
-  const cellsPerCore = options.cellsPerCore === undefined ? defaultCellsPerCore(v) : Math.round(requirePositive('cellsPerCore', options.cellsPerCore, { max: MAX_CELLS }));
+  const cellsPerCore = options.cellsPerCore === undefined ? defaultCellsPerCore(v) : Math.round(requireNumber('cellsPerCore', options.cellsPerCore, { min: 1, max: MAX_CELLS }));
   const h = a / cellsPerCore;
   const rMax = options.rMaxUm === undefined ? a + Math.max(a, (10 * a) / v) : requireNumber('rMaxUm', options.rMaxUm, { min: a * 1.2, max: 50 * a, unit: 'µm' });
+  if (v > MAX_SOLVER_V) {
+    throw new ModelError(
+      `V = ${v.toFixed(1)} is above ${MAX_SOLVER_V}, the largest this mode solver handles (thousands of modes, seconds of work).`,
+      'finite-difference radial solver',
+      'use a smaller core or NA, or a longer wavelength',
+    );
+  }
   const n = Math.ceil(rMax / h);
   if (n > MAX_CELLS) {
     throw new ModelError(`The fiber needs ${n} grid cells (more than ${MAX_CELLS}): V = ${v.toFixed(1)} is too large for this solver.`, 'finite-difference radial solver', 'use a shorter core radius, a smaller NA or a longer wavelength');
