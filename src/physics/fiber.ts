@@ -54,7 +54,10 @@ export function vNumber(input: { coreRadiusUm: number; na: number; wavelengthNm:
   const a = requireCoreRadiusUm('coreRadiusUm', input?.coreRadiusUm);
   const na = requireNa('na', input?.na);
   const wavelengthNm = requireWavelengthNm('wavelengthNm', input?.wavelengthNm);
-  return (2 * Math.PI * a * na * NM_PER_UM) / wavelengthNm;
+  const v = (2 * Math.PI * a * na * NM_PER_UM) / wavelengthNm;
+  // A subnormal radius times a subnormal NA underflows to V = 0: no fiber, and not what the inputs say.
+  if (!(v > 0)) throw new InputError('coreRadiusUm', a, 'a core radius and NA large enough to compute V', 'fibers have V from about 1 to 100');
+  return v;
 }
 
 /** NA = √(n1² − n2²) (Snyder & Love 1983, definitions of NA and Δ). */
@@ -83,6 +86,7 @@ export function naFromDelta(input: { coreIndex: number; deltaPercent: number }):
     hint: (v) => (v >= MAX_DELTA_PERCENT ? 'Δ is given in percent; single-mode fibers have about 0.35 %' : undefined),
   });
   const na = n1 * Math.sqrt((2 * deltaPercent) / 100);
+  if (!(na > 0)) throw new InputError('deltaPercent', deltaPercent, 'a Δ large enough to give an NA', 'single-mode fibers have about 0.35 %');
   if (!(na < 1)) {
     throw new InputError('deltaPercent', deltaPercent, `a Δ giving NA < 1 (this gives NA = ${na.toFixed(3)})`, 'Δ is given in percent; single-mode fibers have about 0.35 %');
   }
