@@ -52,3 +52,13 @@ export function need(q: QuantityState): number {
   if (q.value === undefined) throw q.failure ?? new InputError(q.argument, q.text, 'a number');
   return q.value;
 }
+
+/**
+ * The field's value in its base unit, for reports and titles: "1,55 µm" typed into a
+ * wavelength field reads "1550 nm", never the raw text with a second unit stuck on.
+ */
+export function shownValue(q: QuantityState, unit: string, significant = 6): string {
+  if (q.value === undefined) return `${q.text.slice(0, 20)} (not a number)`;
+  const v = Number(q.value.toPrecision(significant));
+  return unit ? `${v} ${unit}` : String(v);
+}

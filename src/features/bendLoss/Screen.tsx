@@ -1,7 +1,7 @@
 // Bend loss: what a tight loop costs, per turn and for N turns, and how it compares with the ITU-T limits.
 import { useState } from 'preact/hooks';
 import { NumberField } from '../../ui/NumberField';
-import { need, useQuantity } from '../../ui/useQuantity';
+import { need, useQuantity, shownValue } from '../../ui/useQuantity';
 import { useResult } from '../../ui/useResult';
 import { useComputed } from '../../ui/useComputed';
 import { ResultCard } from '../../ui/ResultCard';
@@ -84,9 +84,9 @@ export default function Screen() {
       title: 'Bend loss',
       inputs: [
         ['Fiber', fiber?.name ?? ''],
-        ['Wavelength', `${wavelength.text} nm`],
-        ['Bend radius', `${radius.text} mm`],
-        ['Turns', turns.text],
+        ['Wavelength', shownValue(wavelength, 'nm')],
+        ['Bend radius', shownValue(radius, 'mm')],
+        ['Turns', shownValue(turns, '')],
         ['Radius model', MODEL_WORDS[model]],
       ],
       outputs: [
@@ -164,7 +164,7 @@ export default function Screen() {
       <ResultCard title="Loss versus bend radius" stale={sweep.stale} error={sweep.error} busy={sweep.busy}>
         {sweep.result && (
           <LinePlot
-            title={`Loss per turn at ${wavelength.text} nm`}
+            title={`Loss per turn at ${shownValue(wavelength, 'nm')}`}
             xLabel="Bend radius (mm)"
             yLabel="Loss per turn (dB)"
             logY

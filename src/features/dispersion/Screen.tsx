@@ -1,7 +1,7 @@
 // Chromatic dispersion of a single-mode fiber type: D(λ) over 1200–1650 nm with its material and
 // waveguide parts, the zero-dispersion wavelength and slope, and the dispersion limit of a link.
 import { NumberField } from '../../ui/NumberField';
-import { need, useQuantity } from '../../ui/useQuantity';
+import { need, useQuantity, shownValue } from '../../ui/useQuantity';
 import { useResult } from '../../ui/useResult';
 import { ResultCard } from '../../ui/ResultCard';
 import { HowComputed } from '../../ui/HowComputed';
@@ -60,8 +60,8 @@ export default function Screen() {
         ['Model', `step index, core radius ${formatNumber(c.model.coreRadiusUm, 4)} µm, ${formatNumber(c.model.germaniaFraction * 100, 3)} mol % GeO₂ core, silica cladding`],
         ['Wavelength', `${l.at.wavelengthNm} nm`],
         ['Link length', `${formatNumber(l.lengthKm, 5)} km`],
-        ['Bit rate', `${bitRate.text} Gbit/s`],
-        ['Source spectral width (RMS)', `${width.text} nm`],
+        ['Bit rate', shownValue(bitRate, 'Gbit/s')],
+        ['Source spectral width (RMS)', shownValue(width, 'nm')],
       ],
       outputs: [
         ['D', `${formatFixed(l.at.totalPsPerNmKm, 2)} ps/(nm·km) (material ${formatFixed(l.at.materialPsPerNmKm, 2)}, waveguide ${formatFixed(l.at.waveguidePsPerNmKm, 2)}, profile ${formatFixed(l.at.profilePsPerNmKm, 2)})`],

@@ -2,7 +2,7 @@
 // and the exact LP01 overlap beside the Gaussian formulas.
 import { useState } from 'preact/hooks';
 import { NumberField } from '../../ui/NumberField';
-import { need, useQuantity } from '../../ui/useQuantity';
+import { need, useQuantity, shownValue } from '../../ui/useQuantity';
 import { useResult } from '../../ui/useResult';
 import { useComputed } from '../../ui/useComputed';
 import { ResultCard } from '../../ui/ResultCard';
@@ -91,10 +91,10 @@ export default function Screen() {
       inputs: [
         ['Fiber sending', pick1.fiber?.name ?? ''],
         ['Fiber receiving', pick2.fiber?.name ?? ''],
-        ['Wavelength', `${wavelength.text} nm`],
-        ['Lateral offset', `${offset.text} µm`],
-        ['Angle', `${tilt.text}°`],
-        ['End gap', `${gap.text} µm, ${medium === 'air' ? 'air' : 'index-matching gel'}`],
+        ['Wavelength', shownValue(wavelength, 'nm')],
+        ['Lateral offset', shownValue(offset, 'µm')],
+        ['Angle', shownValue(tilt, '°')],
+        ['End gap', `${shownValue(gap, 'µm')}, ${medium === 'air' ? 'air' : 'index-matching gel'}`],
       ],
       outputs: [
         ['Total loss (Gaussian fields)', formatDb(g.joint.totalLossDb, 3)],

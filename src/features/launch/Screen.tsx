@@ -1,7 +1,7 @@
 // Launch between single-mode and multimode: power into each mode, and the loss each way.
 import { useState } from 'preact/hooks';
 import { NumberField } from '../../ui/NumberField';
-import { useQuantity } from '../../ui/useQuantity';
+import { useQuantity, shownValue } from '../../ui/useQuantity';
 import { useComputed } from '../../ui/useComputed';
 import { ResultCard } from '../../ui/ResultCard';
 import { HowComputed } from '../../ui/HowComputed';
@@ -70,8 +70,8 @@ export default function Screen() {
       inputs: [
         ['Single-mode fiber', sm?.name ?? ''],
         ['Multimode fiber', mm?.name ?? ''],
-        ['Wavelength', `${wavelength.text} nm`],
-        ['Offset of the cores', `${offset.text} µm`],
+        ['Wavelength', shownValue(wavelength, 'nm')],
+        ['Offset of the cores', shownValue(offset, 'µm')],
         ['Single-mode field', fieldModel === 'exact' ? 'exact LP01' : 'Gaussian'],
         ['Multimode power', fill === 'uniform' ? 'uniform over all modes' : `lowest ${RESTRICTED_GROUP_FRACTION * 100} % of the mode groups`],
       ],
