@@ -264,11 +264,15 @@ export function FiberSummary({ fiber }: { fiber: ResolvedFiber }) {
         {formatNumber(fiber.claddingDiameterUm)} µm.
       </p>
       {fiber.notes.length > 0 && (
-        <ul>
-          {fiber.notes.map((n, i) => (
-            <li key={i}>{n}</li>
-          ))}
-        </ul>
+        // Folded: on a phone the derivation would push the inputs below the fold; trainers open it.
+        <details>
+          <summary>Where these numbers come from</summary>
+          <ul>
+            {fiber.notes.map((n, i) => (
+              <li key={i}>{n}</li>
+            ))}
+          </ul>
+        </details>
       )}
     </div>
   );
