@@ -20,6 +20,8 @@ const SQRT_HALF = Math.SQRT1_2;
 const EPS = Number.EPSILON;
 /** Recurrence values are rescaled when they pass this, to stay far from overflow. */
 const RESCALE_AT = 1e250;
+/** Below this argument J_n is its leading power-series term to full precision. */
+const TINY_X = 1e-20;
 /** Hankel's series is used only from this argument on (below, Miller is as cheap and always converges). */
 const HANKEL_MIN_X = 30;
 /** Largest Hankel term allowed: each unit of 10 in the largest term costs one decimal digit. */
@@ -50,6 +52,13 @@ function millerStart(n: number, x: number): number {
  */
 export function besselJPairUnchecked(n: number, x: number): [number, number] {
   if (x === 0) return [n === 0 ? 1 : 0, 0];
+  if (x < TINY_X) {
+    // Leading term of the power series (A&S 9.1.10): the next term is smaller by x²/(4(n+1)) < 1e-40,
+    // and Miller's steps of ratio 2k/x would overflow before they could be rescaled.
+    let jn = 1;
+    for (let k = 1; k <= n && jn !== 0; k++) jn *= x / 2 / k;
+    return [jn, (jn * x) / 2 / (n + 1)];
+  }
   const start = millerStart(n + 1, x);
   const twoOverX = 2 / x;
   let above = 0; // J_{k+1}
@@ -185,11 +194,12 @@ export function besselK01ScaledUnchecked(x: number): [number, number] {
       if (term * harmonic < EPS * 1e-3 * harmonicSum && term < EPS * 1e-3) break;
     }
     i1 *= x / 2;
-    const k0 = -(Math.log(x / 2) + EULER_GAMMA) * i0 + harmonicSum;
+    const k0 = -(Math.log(x) - Math.LN2 + EULER_GAMMA) * i0 + harmonicSum; // log(x) − ln 2: x/2 underflows for subnormal x
     const k1 = (1 / x - i1 * k0) / i0;
     const scale = Math.exp(x);
     return [k0 * scale, k1 * scale];
   }
+  if (x >= K_ASYMPTOTIC_X) return [kScaledAsymptotic(0, x), kScaledAsymptotic(1, x)];
   // Temme 1975: K_ν for ν = μ = 0 from the continued fraction for the ratio of confluent
   // hypergeometric functions U(ν+1/2+k, 2ν+1, 2x), summed by Steed's algorithm.
   const a1 = 0.25; // 1/4 − μ²
@@ -222,6 +232,22 @@ export function besselK01ScaledUnchecked(x: number): [number, number] {
   const k0 = Math.sqrt(Math.PI / (2 * x)) / s;
   const k1 = (k0 * (x + 0.5 - h)) / x;
   return [k0, k1];
+}
+
+/** From here on e^x K_ν(x) by its large-argument expansion; its terms fall below 1e-17 within a few. */
+const K_ASYMPTOTIC_X = 1000;
+
+/** e^x K_ν(x) ~ √(π/(2x)) Σ (μ−1)(μ−9)…(μ−(2k−1)²)/(k!(8x)^k), μ = 4ν² (A&S 9.7.2). For x ≥ 1000. */
+function kScaledAsymptotic(nu: number, x: number): number {
+  const mu = 4 * nu * nu;
+  let term = 1;
+  let sum = 1;
+  for (let k = 1; k < 30; k++) {
+    term *= (mu - (2 * k - 1) * (2 * k - 1)) / (k * 8 * x);
+    sum += term;
+    if (Math.abs(term) < EPS * 0.1) break;
+  }
+  return Math.sqrt(Math.PI / (2 * x)) * sum;
 }
 
 /** Overflow guard for the forward K recurrence. */
@@ -258,10 +284,18 @@ function requireKArgument(x: unknown): number {
   });
 }
 
+function overflow(n: number, x: number, scaled: boolean): ModelError {
+  return new ModelError(
+    `${scaled ? 'e^x K' : 'K'}_${n}(${x}) is beyond the float64 range (about 1.8e308)`,
+    'Bessel K',
+    'K_n grows like (n−1)!/2·(2/x)^n for small x: use a larger x or a lower order',
+  );
+}
+
 /**
  * Modified Bessel function of the second kind K_n(x), integer n 0..BESSEL_MAX_ORDER, x > 0.
- * About 1e-14 relative. Returns +Infinity only when K_n(x) is beyond the float64 range
- * (e.g. K_150(1e-3)), and 0 when it is below it (x ≳ 700).
+ * About 1e-14 relative. Throws ModelError when K_n(x) is beyond the float64 range
+ * (e.g. K_150(1e-3)); returns 0 when it is below it (x ≳ 700).
  */
 export function besselK(n: number, x: number): number {
   requireOrder(n);
@@ -275,23 +309,26 @@ export function besselK(n: number, x: number): number {
     if (remainingScale > 0 && (value < 1 || remainingX === 0)) {
       value *= K_RESCALE;
       remainingScale--;
-      if (value === Infinity) return Infinity;
+      if (value === Infinity) throw overflow(n, x, false);
     } else {
       const chunk = Math.min(remainingX, EXP_CHUNK);
       value *= Math.exp(-chunk);
       remainingX -= chunk;
+      if (value === 0) return 0; // underflow: K_n(x) < 5e-324 (x ≳ 745 for moderate n)
     }
   }
+  if (!Number.isFinite(value)) throw overflow(n, x, false); // K_1(x) ≈ 1/x overflows for x < 5.6e-309
   return value;
 }
 
-/** e^x K_n(x): no underflow for large x. Same accuracy as besselK; +Infinity beyond float64. */
+/** e^x K_n(x): no underflow for large x. Same accuracy as besselK; ModelError beyond float64. */
 export function besselKScaled(n: number, x: number): number {
   requireOrder(n);
   requireKArgument(x);
   const [mantissa, rescales] = besselKScaledParts(n, x);
   let value = mantissa;
-  for (let i = 0; i < rescales && value !== Infinity; i++) value *= K_RESCALE;
+  for (let i = 0; i < rescales; i++) value *= K_RESCALE;
+  if (!Number.isFinite(value)) throw overflow(n, x, true);
   return value;
 }
 

@@ -5,7 +5,7 @@
 // Each root is bracketed by Bessel zeros (cutoff j_{l-1,m} below, j_{l,m} above) and found by
 // Newton's method with the analytic derivative, safeguarded by bisection inside that bracket.
 import { besselJRatioUnchecked, besselJZero, besselKTermUnchecked, BESSEL_MAX_ORDER } from './bessel';
-import { ModelError, requireInteger, requirePositive } from './errors';
+import { InputError, ModelError, requireInteger, requirePositive } from './errors';
 
 export interface LPMode {
   /** Azimuthal order. */
@@ -59,6 +59,8 @@ function checkMinV(v: number): void {
 
 /** Vector-mode families of LP_lm (Gloge 1971, mode designations): HE_1m; TE_0m, TM_0m, HE_2m; EH_(l-1)m, HE_(l+1)m. */
 export function lpVectorModes(l: number, m: number): string[] {
+  requireInteger('l', l, 0, BESSEL_MAX_ORDER - 1);
+  requireInteger('m', m, 1, MAX_RADIAL_ORDER);
   const name = (family: string, order: number) => (order < 10 && m < 10 ? `${family}${order}${m}` : `${family}${order},${m}`);
   if (l === 0) return [name('HE', 1)];
   if (l === 1) return [name('TE', 0), name('TM', 0), name('HE', 2)];
@@ -261,7 +263,8 @@ export function lpModes(v: number): LPMode[] {
 
 /** Total count of guided modes with their degeneracy (both polarizations, cos and sin). */
 export function totalModeCount(modes: readonly LPMode[]): number {
-  return modes.reduce((sum, mode) => sum + mode.degeneracy, 0);
+  if (!Array.isArray(modes)) throw new InputError('modes', modes, 'a list of LP modes from lpModes');
+  return modes.reduce((sum, mode) => sum + (mode?.degeneracy === 2 || mode?.degeneracy === 4 ? mode.degeneracy : invalidMode(mode)), 0);
 }
 
 /**
@@ -281,4 +284,8 @@ export function lpBvCurve(l: number, m: number, vMax: number, samples = 100): [v
     points.push([v, solveLpMode(l, m, v).b]);
   }
   return points;
+}
+
+function invalidMode(mode: unknown): never {
+  throw new InputError('modes', mode, 'LP modes with degeneracy 2 or 4, as lpModes returns them');
 }

@@ -4,7 +4,7 @@
 import { besselJPairUnchecked, besselK01ScaledUnchecked, besselKLogScaledUnchecked } from './bessel';
 import { InputError, requireInteger, requireNumber, requirePositive } from './errors';
 import { vNumber } from './fiber';
-import { LP11_CUTOFF_V, solveLpMode, type LPMode } from './lpModes';
+import { LP11_CUTOFF_V, LP_MAX_V, LP_MIN_V, solveLpMode, type LPMode } from './lpModes';
 import { compositeRule } from './quadrature';
 import { brentRoot } from './roots';
 
@@ -112,7 +112,7 @@ export function petermann2SpotRatio(v: number): number {
 
 /** Marcuse's spot-size fit w/a = 0.65 + 1.619 V^-1.5 + 2.879 V^-6 (Marcuse 1977, BSTJ 56(5); ±1 % for 1.2 < V < 2.4). */
 export function marcuseSpotRatio(v: number): number {
-  requirePositive('v', v);
+  requireNumber('v', v, { min: LP_MIN_V, max: LP_MAX_V, hint: 'the same V range as the exact LP01 solution' });
   return MARCUSE_A + MARCUSE_B * Math.pow(v, -1.5) + MARCUSE_C * Math.pow(v, -6);
 }
 

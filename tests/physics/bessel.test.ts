@@ -8,7 +8,7 @@ import {
   besselKScaled,
   BESSEL_MAX_ORDER,
 } from '../../src/physics/bessel';
-import { InputError } from '../../src/physics/errors';
+import { InputError, ModelError } from '../../src/physics/errors';
 import fixture from '../fixtures/scipy-bessel/bessel.json';
 
 interface Row { n: number; x: number; j: number; k: number | null; kScaled: number | null; jHigh: number; kHigh: number | null }
@@ -115,13 +115,32 @@ describe(`against the scipy / mpmath fixture (scipy ${fixture.scipy}, mpmath ${f
     expectClose(`e^x K_${r.n}(${r.x})`, besselKScaled(r.n, r.x), r.kScaled as number, 2e-13);
   });
   const overflowRows = rows.filter((r) => r.kHigh === null);
-  it.each(overflowRows)('K_$n($x) beyond the float64 range returns +Infinity, never NaN', (r) => {
-    expect(besselK(r.n, r.x)).toBe(Infinity);
+  it.each(overflowRows)('K_$n($x) beyond the float64 range is refused with a ModelError, never Infinity or NaN', (r) => {
+    expect(() => besselK(r.n, r.x)).toThrow(ModelError);
+    expect(() => besselKScaled(r.n, r.x)).toThrow(ModelError);
   });
   it('K_125(0.316228), which scipy overflows but float64 can hold (mpmath: 1.01264583278e307), is finite and right', () => {
     const row = rows.find((r) => r.n === 125 && r.x === 0.316228) as Row;
     expect(row.k).toBeNull();
     expectClose('K_125(0.316228)', besselK(125, 0.316228), row.kHigh as number, 2e-14);
+  });
+  it.each([
+    // 30-digit mpmath values (besselk × exp), beyond the fixture's x ≤ 1e3: the large-argument branch (A&S 9.7.2)
+    [0, 1e4, 0.012532984717699285288],
+    [1, 5e3, 0.017725867766374100722],
+    [5, 2e3, 0.028198854387666537184],
+    [150, 1e6, 0.0012674933653082623346],
+    [0, 999, 0.039648145678546110853],
+    [0, 1001, 0.039608527229384946986],
+  ])('e^x K_%i(%f) = %f for large x (mpmath)', (n, x, expected) => {
+    expectClose(`e^x K_${n}(${x})`, besselKScaled(n, x), expected, 2e-14);
+  });
+  it('K_0 at the smallest subnormal x is finite (≈ 744.4) and K_1 there is refused as beyond float64', () => {
+    expectClose('K_0(5e-324)', besselK(0, Number.MIN_VALUE), -Math.log(Number.MIN_VALUE) + Math.LN2 - 0.5772156649015329, 1e-15); // K_0 ≈ −ln(x/2) − γ, A&S 9.6.13
+    expect(() => besselK(1, Number.MIN_VALUE)).toThrow(ModelError);
+  });
+  it('K_n far beyond underflow (x = 1e308) is 0, returned at once', () => {
+    expect(besselK(3, 1e308)).toBe(0);
   });
   const zeroCases = fixture.zeros.flatMap((z) => z.zeros.map((value, i) => ({ n: z.n, k: i + 1, value })));
   it.each(zeroCases)('j_{$n,$k} matches scipy jn_zeros to 1e-14 relative', ({ n, k, value }) => {
