@@ -46,6 +46,9 @@ for (const step of steps) {
   }
 }
 
-if (stoppedAt) console.log(`\nstopped: ${stoppedAt} failed; later steps did not run`);
+if (stoppedAt) {
+  const rest = steps.slice(steps.findIndex((s) => s.name === stoppedAt) + 1).map((s) => s.name);
+  console.log(`\nstopped: ${stoppedAt} failed${rest.length ? `; not run: ${rest.join(', ')}` : ''}`);
+}
 console.log(`summary: ${passed} passed, ${failed} failed`);
 process.exit(stoppedAt ? 1 : 0);
