@@ -77,6 +77,36 @@ async function horizontalOverflow(page: Page): Promise<Overflow> {
   });
 }
 
+// Issue 7: touch targets at least 44 × 44 CSS px (WCAG 2.2 SC 2.5.5). A control counts with
+// its label when the label is tied to it (tapping the label works the control); links inside
+// running text are exempt, as in the WCAG exception for inline targets.
+const TOUCH_TARGET_PX = 44;
+
+async function smallTouchTargets(page: Page): Promise<string[]> {
+  return page.evaluate((min) => {
+    const small: string[] = [];
+    const controls = document.querySelectorAll<HTMLElement>('button, input:not([type="hidden"]), select, textarea, summary, a[href]');
+    for (const el of controls) {
+      const style = getComputedStyle(el);
+      if (style.visibility === 'hidden' || style.display === 'none' || el.getClientRects().length === 0) continue;
+      if (el.tagName === 'A' && style.display === 'inline' && (el.parentElement?.textContent ?? '').trim() !== (el.textContent ?? '').trim()) continue;
+      let { width, height } = el.getBoundingClientRect();
+      const labels = (el as HTMLInputElement).labels;
+      if (labels) for (const l of labels) {
+        const r = l.getBoundingClientRect();
+        width = Math.max(width, r.width);
+        height = Math.max(height, r.height);
+      }
+      if (width < min - 0.5 || height < min - 0.5) {
+        const input = el as HTMLInputElement;
+        const name = (el.getAttribute('aria-label') ?? (input.labels?.[0]?.textContent || el.textContent || `type=${input.type}`)).trim().slice(0, 30);
+        small.push(`${el.tagName.toLowerCase()}${el.id ? '#' + el.id : ''} "${name}" is ${width.toFixed(0)}×${height.toFixed(0)} px`);
+      }
+    }
+    return small;
+  }, TOUCH_TARGET_PX);
+}
+
 interface AxeFinding {
   id: string;
   impact: string;
@@ -122,6 +152,12 @@ describe.each(SIZES)('at $label', ({ viewport }) => {
     expect(o.scrollWidth, `page is ${o.scrollWidth} px wide in a ${o.clientWidth} px window; ${o.widest.join('; ')}`).toBeLessThanOrEqual(o.clientWidth);
   });
 
+  it.each(SCREENS)('on the $title screen every control is a touch target of at least 44 × 44 px', async ({ id, title }) => {
+    await show(page, id, title);
+    const small = await smallTouchTargets(page);
+    expect(small, small.join('\n')).toEqual([]);
+  });
+
   describe.each(THEMES)('in the %s theme', (theme) => {
     it.each(SCREENS)('the $title screen has no serious or critical accessibility violation', async ({ id, title }) => {
       await show(page, id, title);
@@ -141,12 +177,17 @@ describe('the checks themselves can fail', () => {
       await page.evaluate(() => {
         const main = document.querySelector('main')!;
         main.append(document.createElement('input'));
+        const tick = document.createElement('input');
+        tick.type = 'checkbox';
+        tick.setAttribute('aria-label', 'tiny tick box');
+        main.append(tick);
         const wide = document.createElement('div');
         wide.style.width = '2000px';
         wide.textContent = 'too wide';
         main.append(wide);
       });
       expect((await seriousAxeViolations(page)).map((v) => v.id)).toContain('label');
+      expect((await smallTouchTargets(page)).join()).toMatch(/tiny tick box/);
       const o = await horizontalOverflow(page);
       expect(o.scrollWidth).toBeGreaterThan(o.clientWidth);
     } finally {
