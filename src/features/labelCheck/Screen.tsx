@@ -24,6 +24,11 @@ const VERDICT: Record<LabelVerdict, { words: string; css: string }> = {
   'not-single-mode': { words: 'Not single-mode at this wavelength', css: 'verdict-bad' },
 };
 
+/** A field's own error is shown beside the field; the card then only points to it. */
+function cardError(state: { error?: string; errorArgument?: string }): string | undefined {
+  return state.errorArgument === 'wavelengthNm' ? 'Check the value marked above.' : state.error;
+}
+
 export default function Screen() {
   const picker = useFiberPicker({ id: 'label-check', label: 'The label', kinds: ['single-mode'], defaultCategory: 'G.652.D' });
   const wavelength = useQuantity('wavelengthNm', 'wavelength', '1310');
@@ -70,7 +75,7 @@ export default function Screen() {
         <NumberField q={wavelength} label="System wavelength" unit="nm" quickPicks={QUICK_WAVELENGTHS_NM} calc={calc} />
       </div>
 
-      <ResultCard title="Verdict" stale={state.stale} error={state.error} copyText={copy || undefined}>
+      <ResultCard title="Verdict" stale={state.stale} error={cardError(state)} copyText={copy || undefined}>
         {r && (
           <>
             <p class={VERDICT[r.verdict].css}>{VERDICT[r.verdict].words}</p>

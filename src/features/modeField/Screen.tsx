@@ -22,6 +22,11 @@ const WORDS: Record<ModeFieldDiameter['definition'], { title: string; what: stri
   marcuse: { title: 'Marcuse formula', what: `Marcuse 1977 closed form of the Gaussian fit, within 1 % for ${MARCUSE_MIN_V} < V < ${MARCUSE_MAX_V}.` },
 };
 
+/** A field's own error is shown beside the field; the card then only points to it. */
+function cardError(state: { error?: string; errorArgument?: string }): string | undefined {
+  return state.errorArgument === 'wavelengthNm' ? 'Check the value marked above.' : state.error;
+}
+
 export default function Screen() {
   const picker = useFiberPicker({ id: 'mode-field', label: 'Single-mode fiber type', kinds: ['single-mode'], defaultCategory: 'G.652.D' });
   const wavelength = useQuantity('wavelengthNm', 'wavelength', '1310');
@@ -73,7 +78,7 @@ export default function Screen() {
         <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={QUICK_WAVELENGTHS_NM} calc={calc} />
       </div>
 
-      <ResultCard title="Mode field diameter, three ways" stale={state.stale} error={state.error} copyText={copy || undefined}>
+      <ResultCard title="Mode field diameter, three ways" stale={state.stale} error={cardError(state)} copyText={copy || undefined}>
         {r && (
           <>
             {vNote && (

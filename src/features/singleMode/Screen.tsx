@@ -21,6 +21,11 @@ const TABLE_ROWS = 40;
 
 const name = (m: { l: number; m: number }) => `LP${m.l}${m.m}`;
 
+/** A field's own error is shown beside the field; the card then only points to it. */
+function cardError(state: { error?: string; errorArgument?: string }): string | undefined {
+  return state.errorArgument === 'wavelengthNm' ? 'Check the value marked above.' : state.error;
+}
+
 export default function Screen() {
   const picker = useFiberPicker({ id: 'single-mode', label: 'Fiber type', kinds: ['single-mode', 'multimode'], defaultCategory: 'G.652.D' });
   const wavelength = useQuantity('wavelengthNm', 'wavelength', '1310');
@@ -85,7 +90,7 @@ export default function Screen() {
         <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={QUICK_WAVELENGTHS_NM} calc={calc} />
       </div>
 
-      <ResultCard title="Single-mode check" stale={state.stale} error={state.error} copyText={copy || undefined}>
+      <ResultCard title="Single-mode check" stale={state.stale} error={cardError(state)} copyText={copy || undefined}>
         {r && (
           <>
             <p class={verdict.css}>{verdict.words}</p>
