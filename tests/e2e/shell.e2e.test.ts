@@ -124,6 +124,30 @@ describe('a new version is offered, never forced', () => {
     expect(await buildIdShown(p.page)).toBe(BUILDS.currentId);
   });
 
+  it('an update found while someone is typing is offered, and what they typed stays put', async () => {
+    const server = await serve(BUILDS.current);
+    const p = await profile();
+    await p.page.goto(`${server.url}#/power`);
+    await waitForServiceWorkerControl(p.page);
+    await waitForScreen(p.page);
+    await p.page.locator('#f-powerDbm').click();
+    await p.page.keyboard.press('Control+A');
+    await p.page.keyboard.type('-7.5');
+    await p.page.evaluate(() => ((window as unknown as { __sameDocument: boolean }).__sameDocument = true));
+
+    server.setRoot(BUILDS.next);
+    // The check the app makes when it comes back into view, made at once.
+    await p.page.evaluate(async () => (await navigator.serviceWorker.getRegistration())?.update());
+    await p.page.getByText(UPDATE_OFFER).waitFor({ timeout: 30_000 });
+    await p.page.keyboard.type('5');
+    await p.page.waitForTimeout(2000);
+
+    expect(await p.page.evaluate(() => (window as unknown as { __sameDocument?: boolean }).__sameDocument)).toBe(true);
+    expect(await p.page.locator('#f-powerDbm').inputValue()).toBe('-7.55');
+    expect(await p.page.evaluate(() => document.activeElement?.id)).toBe('f-powerDbm');
+    expect(await buildIdShown(p.page)).toBe(BUILDS.currentId);
+  });
+
   it('accepting the update reloads into N+1, which then works offline', async () => {
     const { server, p } = await visitNThenServeNext();
     await Promise.all([p.page.waitForEvent('load'), p.page.getByRole('button', { name: 'Reload to update' }).click()]);
