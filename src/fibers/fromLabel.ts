@@ -1,5 +1,5 @@
 // A fiber from its label: the label gives a cutoff wavelength (fiber or cable) and a mode field
-// diameter at a reference wavelength; the mode engine (P1, src/physics/equivalentStepIndex.ts)
+// diameter at a reference wavelength; the mode engine (src/physics/equivalentStepIndex.ts)
 // infers the equivalent step-index core radius and NA that reproduce both. This module only adapts
 // that result for the fiber library and adds the label-consistency warnings the library shows.
 import { equivalentStepIndex } from '../physics';
@@ -22,7 +22,7 @@ export interface DerivedStepIndex {
   warnings: string[];
 }
 
-/** The mode engine's fit (P1, equivalentStepIndex): cutoff + MFD → equivalent step-index a and NA. */
+/** The mode engine’s fit (equivalentStepIndex): cutoff + MFD → equivalent step-index a and NA. */
 export function deriveStepIndex(label: LabelValues): DerivedStepIndex {
   const r = equivalentStepIndex(label);
   return { coreRadiusUm: r.coreRadiusUm, na: r.na, notes: r.notes, warnings: r.warnings };

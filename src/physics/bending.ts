@@ -91,7 +91,7 @@ function prepare(fiber: BendFiber, wavelengthNm: number): Prepared {
   const n1 = Math.sqrt(n2 * n2 + na * na);
   const k = (2 * Math.PI * 1000) / lambda;
   const v = k * a * na;
-  const mode = solveLpMode(0, 1, v); // Gloge 1971 LP01, P1's mode engine
+  const mode = solveLpMode(0, 1, v); // Gloge 1971 LP01 from the mode engine
   if (!(mode.w > 0)) {
     throw new ModelError(`LP01 is too close to its weak-guidance limit at V = ${v.toFixed(3)} to compute a bend loss.`, 'Marcuse 1976 bend loss', 'check the core radius and NA');
   }

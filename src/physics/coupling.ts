@@ -89,7 +89,7 @@ export interface MultimodeModeSet {
 
 export interface MultimodeOptions extends RadialSolverOptions {
   /**
-   * 'auto' (default): a step profile uses the Bessel-function LP modes (Gloge 1971, P1's mode engine), a graded
+   * 'auto' (default): a step profile uses the Bessel-function LP modes (Gloge 1971, the project's mode engine), a graded
    * profile the finite-difference solver. 'finite-difference' forces the solver for both (for cross-checks).
    */
   method?: 'auto' | 'finite-difference';
@@ -460,7 +460,7 @@ function cubicAt(t: Float64Array, x: number, mirrorAtStart: boolean): number {
   return p1 + 0.5 * u * (p2 - p0 + u * (2 * p0 - 5 * p1 + 4 * p2 - p3 + u * (3 * (p1 - p2) + p3 - p0)));
 }
 
-/** The exact scalar LP01 field J0(u r/a)/J0(u), K0(w r/a)/K0(w) of a step-index fiber (P1's mode engine), tabulated. */
+/** The exact scalar LP01 field J0(u r/a)/J0(u), K0(w r/a)/K0(w) of a step-index fiber (the project's mode engine), tabulated. */
 export function lp01RadialField(fiber: StepFiber, wavelengthNm: number): RadialField {
   const v = vNumber({ coreRadiusUm: fiber?.coreRadiusUm, na: fiber?.na, wavelengthNm });
   const mode = solveLpMode(0, 1, v);
