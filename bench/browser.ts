@@ -229,7 +229,7 @@ async function measureTypingLongTasks(): Promise<void> {
         goal: `≤ ${LONG_TASK_GOAL_MS} ms`,
         ratio: longTasks.length ? `${(worst / LONG_TASK_GOAL_MS).toFixed(2)}${worst > LONG_TASK_GOAL_MS ? ' over' : ''}` : '< 1',
       });
-      console.log(`  (${keys} keys in ${n} fields; ${longTasks.length} tasks ≥ 50 ms; longest gap between frames ${formatMs(maxGap)})`);
+      console.log(`  (${keys} keys in ${n} fields; ${longTasks.length} task${longTasks.length === 1 ? "" : "s"} ≥ 50 ms; longest gap between frames ${formatMs(maxGap)})`);
       await context.close();
     }
   } finally {
