@@ -7,13 +7,15 @@ export interface NumberFieldProps {
   unit: string;
   /** Common values offered as one-tap buttons, in `unit`. */
   quickPicks?: number[];
+  /** Text on a quick-pick button when "value unit" reads wrong, e.g. "1 turn". */
+  quickPickLabel?: (value: number) => string;
   help?: string;
   /** A computation's error that names this field's argument (from useResult/useComputed). */
   calc?: { error: string | undefined; errorArgument: string | undefined };
 }
 
 /** A number field with its unit, decimal keypad, conversion note and plain-words error beside it. */
-export function NumberField({ q, label, unit, quickPicks, help, calc }: NumberFieldProps) {
+export function NumberField({ q, label, unit, quickPicks, quickPickLabel, help, calc }: NumberFieldProps) {
   const id = `f-${q.argument}`;
   const calcError = calc?.errorArgument === q.argument ? calc.error : undefined;
   const error = q.error ?? calcError;
@@ -39,7 +41,7 @@ export function NumberField({ q, label, unit, quickPicks, help, calc }: NumberFi
         <div class="quick-picks" role="group" aria-label={`Common values for ${label}`}>
           {quickPicks.map((v) => (
             <button type="button" key={v} aria-pressed={q.value === v} onClick={() => q.setText(String(v))}>
-              {v} {unit}
+              {quickPickLabel ? quickPickLabel(v) : `${v} ${unit}`}
             </button>
           ))}
         </div>

@@ -169,7 +169,8 @@ export function BarChart({ title, xLabel, yLabel, bars, formatValue = (v) => for
           return (
             <g key={`${b.label}-${i}`}>
               <rect x={x} y={py(b.value)} width={w} height={Math.max(0, H - PAD.bottom - py(b.value))} class="plot-bar" />
-              {clean.length <= 16 && <text x={x + w / 2} y={py(b.value) - 4} text-anchor="middle" class="plot-tick">{formatValue(b.value)}</text>}
+              {/* A value label is written only where it fits its slot (about 8.5 px a character at 15 px). */}
+              {formatValue(b.value).length * 8.5 <= slot && <text x={x + w / 2} y={py(b.value) - 4} text-anchor="middle" class="plot-tick">{formatValue(b.value)}</text>}
               {i % labelEvery === 0 && <text x={x + w / 2} y={H - PAD.bottom + 18} text-anchor="middle" class="plot-tick">{b.label}</text>}
             </g>
           );

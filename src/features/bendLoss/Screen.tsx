@@ -91,7 +91,7 @@ export default function Screen() {
       ],
       outputs: [
         ['Loss per turn', lossText(r.loss.lossDbPerTurn)],
-        [`Loss for ${r.loss.turns} turns`, lossText(r.loss.totalLossDb)],
+        [`Loss for ${r.loss.turns} turn${r.loss.turns === 1 ? "" : "s"}`, lossText(r.loss.totalLossDb)],
         [`Radius for ${CRITICAL_LOSS_DB_PER_TURN} dB per turn`, r.critical.status === 'found' ? `${formatNumber(r.critical.bendRadiusMm, 3)} mm` : 'below 1 mm'],
         ['MAC number', formatNumber(r.mac, 3)],
       ],
@@ -116,7 +116,7 @@ export default function Screen() {
       <div class="form">
         <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={[1310, 1550, 1625]} calc={calc} />
         <NumberField q={radius} label="Bend radius" unit="mm" quickPicks={[5, 7.5, 10, 15, 30]} calc={calc} help="Radius, not diameter: half the loop’s width." />
-        <NumberField q={turns} label="Number of turns" unit="turns" quickPicks={[1, 10, 100]} calc={calc} />
+        <NumberField q={turns} label="Number of turns" unit="turns" quickPicks={[1, 10, 100]} quickPickLabel={(n) => (n === 1 ? "1 turn" : `${n} turns`)} calc={calc} />
         <div class="field">
           <label for="bend-model">Bend radius model</label>
           <select id="bend-model" value={model} onChange={(e) => setModel((e.currentTarget as HTMLSelectElement).value as BendRadiusModel)}>
@@ -138,7 +138,7 @@ export default function Screen() {
             <dl class="kv">
               <dt>Loss per turn</dt>
               <dd>{lossText(r.loss.lossDbPerTurn)}</dd>
-              <dt>Loss for {r.loss.turns} turns</dt>
+              <dt>Loss for {r.loss.turns} turn{r.loss.turns === 1 ? "" : "s"}</dt>
               <dd>{lossText(r.loss.totalLossDb)}</dd>
               <dt>Loss per metre of bent fiber</dt>
               <dd>{formatNumber(r.loss.lossDbPerM, 3)} dB/m</dd>
