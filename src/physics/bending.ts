@@ -10,6 +10,7 @@
 import { besselK } from './bessel';
 import { ModelError, requireInteger, requireNumber, requirePositive, requireWavelengthNm } from './errors';
 import { solveLpMode } from './lpModes';
+import { MFD_MIN_UM } from './jointLoss';
 
 /** Strain-optic (Pockels) coefficients and Poisson ratio of fused silica, as used by Schermer & Cole 2007. */
 export const SILICA_P11 = 0.121;
@@ -210,7 +211,7 @@ export function criticalBendRadius(input: BendFiber & { wavelengthNm: number; th
  * typical single-mode fibers 6.5–8.5 at 1550 nm).
  */
 export function macNumber(mfdUm: number, cutoffWavelengthNm: number): number {
-  const mfd = requirePositive('mfdUm', mfdUm, { max: 100, unit: 'µm' });
+  const mfd = requireNumber('mfdUm', mfdUm, { min: MFD_MIN_UM, max: 100, unit: 'µm' }); // a subnormal MFD gave MAC = 0
   const cutoff = requireWavelengthNm('cutoffWavelengthNm', cutoffWavelengthNm);
   return mfd / (cutoff / 1000);
 }

@@ -293,5 +293,8 @@ export function dispersionLimitedReach(input: { dispersionPsPerNmKm: number; bit
   // 1/(4B) with B in Gbit/s is 250/B ps.
   const maxSpreadPs = 1000 / (4 * bitRate);
   const maxPsPerNm = maxSpreadPs / width;
-  return { reachKm: d === 0 ? undefined : maxPsPerNm / d, maxPsPerNm, criterion: DISPERSION_CRITERION };
+  // A subnormal bit rate or width overflows the allowance; a subnormal D the reach (treated as D = 0: no limit).
+  if (!Number.isFinite(maxPsPerNm)) throw new InputError('spectralWidthNm', width, 'a bit rate and spectral width large enough to set a dispersion limit');
+  const reachKm = maxPsPerNm / d;
+  return { reachKm: d === 0 || !Number.isFinite(reachKm) ? undefined : reachKm, maxPsPerNm, criterion: DISPERSION_CRITERION };
 }

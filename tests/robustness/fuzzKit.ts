@@ -133,6 +133,8 @@ export interface CallStats {
   refused: number;
   slowestMs: number;
   slowestArgs: string;
+  /** Time spent inside the function over all calls (ms). */
+  totalMs: number;
 }
 
 const stats = new Map<string, CallStats>();
@@ -140,7 +142,7 @@ const stats = new Map<string, CallStats>();
 function statsFor(module: string, name: string): CallStats {
   let s = stats.get(name);
   if (!s) {
-    s = { module, name, tried: 0, returned: 0, refused: 0, slowestMs: 0, slowestArgs: '' };
+    s = { module, name, tried: 0, returned: 0, refused: 0, slowestMs: 0, slowestArgs: '', totalMs: 0 };
     stats.set(name, s);
   }
   return s;
@@ -242,6 +244,7 @@ export function checkCall<A extends unknown[], R>(module: string, name: string, 
 }
 
 function note(s: CallStats, ms: number, args: readonly unknown[]): void {
+  s.totalMs += ms;
   if (ms > s.slowestMs) {
     s.slowestMs = ms;
     s.slowestArgs = describeArgs(args);
@@ -278,7 +281,7 @@ export function reportAfterAll(module: string): void {
     const rows = [...stats.values()].filter((s) => s.module === module);
     const lines = rows.map(
       (s) =>
-        `${s.name.padEnd(28)} ${String(s.tried).padStart(7)} tried ${String(s.returned).padStart(7)} returned ${String(s.refused).padStart(7)} refused   slowest ${s.slowestMs.toFixed(1).padStart(8)} ms`,
+        `${s.name.padEnd(28)} ${String(s.tried).padStart(7)} tried ${String(s.returned).padStart(7)} returned ${String(s.refused).padStart(7)} refused   slowest ${s.slowestMs.toFixed(1).padStart(7)} ms   total ${(s.totalMs / 1000).toFixed(2).padStart(6)} s`,
     );
     console.log(`fuzz ${module}: inputs per function\n${lines.join('\n')}`);
     try {
