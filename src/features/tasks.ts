@@ -4,6 +4,7 @@
 import { tasks as jointLossTasks } from './jointLoss/tasks';
 import { tasks as bendLossTasks } from './bendLoss/tasks';
 import { tasks as launchTasks } from './launch/tasks';
+import { tasks as dispersionTasks } from './dispersion/tasks';
 
 export type Task = (input: never) => unknown;
 
@@ -11,4 +12,5 @@ export const TASKS: Record<string, Task> = {
   ...jointLossTasks,
   ...bendLossTasks,
   ...launchTasks,
+  ...dispersionTasks,
 };

@@ -3,6 +3,8 @@
 import { NumberField } from '../../ui/NumberField';
 import { need, useQuantity, shownValue } from '../../ui/useQuantity';
 import { useResult } from '../../ui/useResult';
+import { useComputed } from '../../ui/useComputed';
+import { DISPERSION_SWEEP as SWEEP, type DispersionCurveInput, type DispersionCurveOutput } from './tasks';
 import { ResultCard } from '../../ui/ResultCard';
 import { HowComputed } from '../../ui/HowComputed';
 import { LinePlot } from '../../ui/Plot';
@@ -12,15 +14,10 @@ import { useFiberPicker } from '../../ui/FiberPicker';
 import {
   chromaticDispersion,
   DISPERSION_CRITERION,
-  dispersionFiberFromNa,
   dispersionLimitedReach,
-  dispersionSweep,
   InputError,
   linkDispersionPsPerNm,
-  zeroDispersion,
 } from '../../physics';
-
-const SWEEP = { fromNm: 1200, toNm: 1650, stepNm: 1 };
 
 export default function Screen() {
   const picker = useFiberPicker({ id: 'dispersion', label: 'Single-mode fiber type', kinds: ['single-mode'], defaultCategory: 'G.652.D' });
@@ -30,12 +27,11 @@ export default function Screen() {
   const width = useQuantity('spectralWidthNm', 'plain', '0.1');
   const fiber = picker.fiber;
 
-  // The curve depends on the fiber only; the link figures on the rest.
-  const curve = useResult(() => {
-    if (!fiber) throw new InputError('fiber', undefined, 'a single-mode fiber type', picker.error ?? 'pick a fiber type');
-    const model = dispersionFiberFromNa({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, referenceWavelengthNm: fiber.mfdWavelengthNm ?? 1310 });
-    return { model, sweep: dispersionSweep(model, SWEEP), zero: zeroDispersion(model) };
-  }, [fiber, picker.error]);
+  // The curve depends on the fiber only and runs in the compute worker; the link figures on the rest.
+  const curveInput: DispersionCurveInput | undefined = fiber
+    ? { coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, referenceWavelengthNm: fiber.mfdWavelengthNm ?? 1310 }
+    : undefined;
+  const curve = useComputed<DispersionCurveInput, DispersionCurveOutput>('dispersion.curve', curveInput, fiber ? undefined : (picker.error ?? 'Pick a single-mode fiber type.'));
 
   const link = useResult(() => {
     if (!curve.result || curve.stale) throw new InputError('fiber', undefined, 'a fiber type that gives a dispersion curve');
@@ -83,7 +79,7 @@ export default function Screen() {
         <NumberField q={width} label="Source spectral width (RMS)" unit="nm" help="RMS width of the source spectrum; a DFB laser is far below 0.1 nm, a Fabry–Perot laser about 1–3 nm." calc={calc} />
       </div>
 
-      <ResultCard title="Dispersion curve" stale={curve.stale} error={curve.error}>
+      <ResultCard title="Dispersion curve" stale={curve.stale} error={curve.error} busy={curve.busy}>
         {c && (
           <>
             <LinePlot
