@@ -1,8 +1,8 @@
 // Mode fields of the weakly guiding step-index fiber and the mode field diameter (MFD) of LP01.
 // Three definitions: Petermann II (the one ITU-T G.650.1 uses), the best-fit Gaussian, and
 // Marcuse's closed-form fit of that Gaussian.
-import { besselJPairUnchecked, besselK01ScaledUnchecked, besselKLogScaledUnchecked } from './bessel';
-import { InputError, requireInteger, requireNumber, requirePositive } from './errors';
+import { BESSEL_MAX_ORDER, besselJPairUnchecked, besselK01ScaledUnchecked, besselKLogScaledUnchecked } from './bessel';
+import { InputError, ModelError, requireInteger, requireNumber, requirePositive } from './errors';
 import { vNumber } from './fiber';
 import { LP11_CUTOFF_V, LP_MAX_V, LP_MIN_V, solveLpMode, type LPMode } from './lpModes';
 import { compositeRule } from './quadrature';
@@ -21,12 +21,22 @@ const MARCUSE_C = 2.879;
 export type MfdDefinition = 'petermann2' | 'gaussian' | 'marcuse';
 export const MFD_DEFINITIONS: readonly MfdDefinition[] = ['petermann2', 'gaussian', 'marcuse'];
 
+/** Below this w, K_l(w) for l ≥ 1 is near or beyond the float64 range (K_1(w) ≈ 1/w). */
+const TINY_W = 1e-300;
+/** |J_l(u)| below this makes the field (and its square) overflow: u is then at a zero of J_l. */
+const MIN_EDGE_AMPLITUDE = 1e-150;
+
 function requireMode(mode: unknown): LPMode {
   const m = mode as LPMode;
   if (typeof m !== 'object' || m === null) throw new InputError('mode', mode, 'an LP mode from lpModes or solveLpMode');
-  requireInteger('mode.l', m.l, 0, 10000);
-  requirePositive('mode.u', m.u);
-  requireNumber('mode.w', m.w, { min: 0 });
+  requireInteger('mode.l', m.l, 0, BESSEL_MAX_ORDER);
+  // A guided mode has u, w < V ≤ LP_MAX_V. Unbounded u made Miller's recurrence run ~u steps (u = 1e308: forever).
+  requirePositive('mode.u', m.u, { max: LP_MAX_V });
+  requireNumber('mode.w', m.w, { min: 0, max: LP_MAX_V });
+  // At a zero of J_l the field J_l(u r/a)/J_l(u) is unbounded: no guided mode sits there (u < j_{l,m}).
+  if (!(Math.abs(besselJPairUnchecked(m.l, m.u)[0]) > MIN_EDGE_AMPLITUDE)) {
+    throw new ModelError(`u = ${m.u} is at a zero of J_${m.l}: this is not a guided LP mode.`, 'Gloge 1971 LP modes', 'use a mode from lpModes or solveLpMode');
+  }
   return m;
 }
 
@@ -43,7 +53,9 @@ export function lpFieldAt(mode: LPMode, rOverA: number): number {
 
 function fieldUnchecked(l: number, u: number, w: number, rho: number): number {
   if (rho <= 1) return besselJPairUnchecked(l, u * rho)[0] / besselJPairUnchecked(l, u)[0];
-  if (w === 0) return l === 0 ? 1 : Math.pow(rho, -l); // the w → 0 limit of K_l(wρ)/K_l(w)
+  // The w → 0 limit of K_l(wρ)/K_l(w); for l ≥ 1 also below 1e-300, where K_l(w) ≈ (l−1)! 2^(l−1) w^−l overflows
+  // (relative error of the limit ~w², nil) and a subnormal w gave NaN.
+  if (w === 0 || (l >= 1 && w < TINY_W)) return l === 0 ? 1 : Math.pow(rho, -l);
   return Math.exp(besselKLogScaledUnchecked(l, w * rho) - besselKLogScaledUnchecked(l, w) - w * (rho - 1));
 }
 
