@@ -278,8 +278,12 @@ function besselKScaledParts(n: number, x: number): [number, number] {
   return [here, rescales];
 }
 
-function requireKArgument(x: unknown): number {
+/** Largest argument of the scaled K: Temme's b = 2(1 + x) overflows near 9e307 (e^x K_0 then came out 0, not √(π/2x)). */
+export const BESSEL_K_SCALED_MAX_ARGUMENT = 1e300;
+
+function requireKArgument(x: unknown, max?: number): number {
   return requirePositive('x', x, {
+    max,
     hint: typeof x === 'number' && x <= 0 ? 'K_n is infinite at x = 0 and undefined for x < 0' : undefined,
   });
 }
@@ -324,7 +328,7 @@ export function besselK(n: number, x: number): number {
 /** e^x K_n(x): no underflow for large x. Same accuracy as besselK; ModelError beyond float64. */
 export function besselKScaled(n: number, x: number): number {
   requireOrder(n);
-  requireKArgument(x);
+  requireKArgument(x, BESSEL_K_SCALED_MAX_ARGUMENT);
   const [mantissa, rescales] = besselKScaledParts(n, x);
   let value = mantissa;
   for (let i = 0; i < rescales; i++) value *= K_RESCALE;
