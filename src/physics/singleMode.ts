@@ -39,6 +39,7 @@ export interface SingleModeCheck {
 
 /** Resolves the NA from any of the three accepted forms, naming the argument at fault. */
 export function resolveNa(input: IndexContrast): number {
+  if (input === null || typeof input !== 'object') throw new InputError('na', input, 'an NA, core and cladding indices, or core index and Δ');
   const given = input as Partial<{ na: number; coreIndex: number; claddingIndex: number; deltaPercent: number }>;
   const hasNa = given.na !== undefined;
   const hasCladding = given.claddingIndex !== undefined;
