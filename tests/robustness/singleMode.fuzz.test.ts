@@ -12,14 +12,14 @@ const contrastValid = fc.oneof(
   fc.record({ coreIndex: inRange(1.44, 1.48), deltaPercent: inRange(0.1, 1) }),
 );
 const contrastHostile = fc.record({ na: maybe(num(0, 1.2)), coreIndex: maybe(num(0.5, 4.5)), claddingIndex: maybe(num(0.5, 4.5)), deltaPercent: maybe(num(0, 60)) }, { requiredKeys: [] });
-const contrast = mixValid(contrastValid, objectOr(contrastHostile)) as fc.Arbitrary<physics.IndexContrast>;
+const contrast = mixValid<unknown>(contrastValid, objectOr(contrastHostile)) as fc.Arbitrary<physics.IndexContrast>;
 
 describe('singleMode: every fiber gives a finite V, mode counts ≥ 1 and a verdict, or a typed error', () => {
   reportAfterAll(M);
   fuzz(M, 'resolveNa', physics.resolveNa, fc.tuple(contrast), (r) => {
     if (!(r > 0 && r < 1)) throw new Error(`NA = ${r}`);
   });
-  const input = mixValid(
+  const input = mixValid<unknown>(
     fc.tuple(fc.record({ coreRadiusUm: inRange(1, 6), wavelengthNm: inRange(600, 1700) }), contrastValid).map(([a, b]) => ({ ...a, ...b })),
     objectOr(fc.tuple(fc.record({ coreRadiusUm: num(0, 600), wavelengthNm: num(150, 2600) }), contrastHostile).map(([a, b]) => ({ ...b, ...a }))),
   ) as fc.Arbitrary<physics.SingleModeInput>;
