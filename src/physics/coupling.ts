@@ -8,9 +8,9 @@
 // (the integrand is odd in φ), so an offset in any direction couples to one orientation per LP mode. F_l is
 // computed by the trapezoid rule in φ, which is spectrally accurate for smooth periodic integrands
 // (Trefethen & Weideman 2014, SIAM Review 56(3)); for a Gaussian f it equals 2π e^{−(r²+d²)/w²} I_l(2rd/w²).
-import { InputError, ModelError, requireNumber, requirePositive } from './errors';
+import { InputError, ModelError, requireInteger, requireNumber, requirePositive } from './errors';
 import { vNumber } from './fiber';
-import { DB_PER_NEPER, lateralOffsetLossDb, mfdMismatchLossDb } from './jointLoss';
+import { DB_PER_NEPER, lateralOffsetLossDb, MFD_MIN_UM, mfdMismatchLossDb } from './jointLoss';
 import { lpModes, solveLpMode } from './lpModes';
 import { lpFieldAt, modeFieldDiameterUm } from './modeField';
 import { gradedIndexProfile, solveRadialModes, stepIndexProfile, type RadialSolverOptions } from './radialSolver';
@@ -28,7 +28,8 @@ export interface RadialField {
 
 /** Gaussian amplitude exp(−ρ²/w²), w = MFD/2 (Marcuse 1977). */
 export function gaussianRadialField(mfdUm: number): RadialField {
-  const w = requirePositive('mfdUm', mfdUm, { max: 100, unit: 'µm' }) / 2;
+  // MFD ≥ 0.1 µm as for the Gaussian joint formulas: a subnormal MFD gave w = 0 and a zero-size field.
+  const w = requireNumber('mfdUm', mfdUm, { min: MFD_MIN_UM, max: 100, unit: 'µm' }) / 2;
   // exp(−2ρ²/w²) < 1e-16 for ρ > w √(8 ln 10 · 2)/2 ≈ 4.3 w.
   const extentUm = w * Math.sqrt(8 * Math.LN10);
   return { name: `Gaussian, MFD ${mfdUm} µm`, at: (rho) => Math.exp(-(rho * rho) / (w * w)), extentUm, powerUm2: (Math.PI * w * w) / 2 };
@@ -39,10 +40,14 @@ export function gaussianRadialField(mfdUm: number): RadialField {
  * Power by the trapezoid rule on the same table.
  */
 export function tabulatedRadialField(name: string, stepUm: number, values: ArrayLike<number>): RadialField {
-  const h = requirePositive('stepUm', stepUm, { unit: 'µm' });
+  const h = requirePositive('stepUm', stepUm, { max: MAX_TABLE_STEP_UM, unit: 'µm' });
+  if (values === null || typeof values !== 'object' || typeof values.length !== 'number') throw new InputError('values', values, 'a list of field samples');
   const n = values.length;
-  if (n < 3) throw new InputError('values', n, 'at least 3 samples');
-  const peak = Math.max(...Array.from(values, Math.abs));
+  if (n < 3 || n > MAX_TABLE_SAMPLES) throw new InputError('values', n, `from 3 to ${MAX_TABLE_SAMPLES} samples`);
+  // A loop, not Math.max(...values): spreading 200 000 samples overflowed the call stack (RangeError).
+  let peak = 0;
+  for (let i = 0; i < n; i++) peak = Math.max(peak, Math.abs(requireNumber(`values[${i}]`, values[i], { min: -MAX_TABLE_VALUE, max: MAX_TABLE_VALUE })));
+  if (!(peak > 0)) throw new InputError('values', 'all zero', 'a field that is not zero everywhere');
   let last = n - 1;
   while (last > 1 && values[last] * values[last] < 1e-16 * peak * peak) last--;
   let power = 0;
@@ -51,6 +56,7 @@ export function tabulatedRadialField(name: string, stepUm: number, values: Array
     const b = values[i] * values[i] * i * h;
     power += 0.5 * (a + b) * h;
   }
+  if (!(power > 0) || !Number.isFinite(power)) throw new InputError('values', `power ${power}`, 'a field with a finite, non-zero power', 'the samples are too small or too large');
   const table = Float64Array.from(values);
   return {
     name,
@@ -64,6 +70,33 @@ export function tabulatedRadialField(name: string, stepUm: number, values: Array
       return table[i] * (1 - t) + table[i + 1] * t;
     },
   };
+}
+
+/** Limits of a tabulated field: far beyond any fiber field, small enough that f² and ∫f² r dr stay finite. */
+const MAX_TABLE_STEP_UM = 100;
+const MAX_TABLE_SAMPLES = 1_000_000;
+const MAX_TABLE_VALUE = 1e100;
+
+/** Checks that `f` is a field made by gaussianRadialField, tabulatedRadialField or lp01RadialField. */
+function requireRadialField(argument: string, f: unknown): RadialField {
+  const field = f as RadialField;
+  if (field === null || typeof field !== 'object' || typeof field.at !== 'function') throw new InputError(argument, f, 'a radial field (gaussianRadialField, tabulatedRadialField or lp01RadialField)');
+  requirePositive(`${argument}.extentUm`, field.extentUm, { max: 1e6, unit: 'µm' });
+  requirePositive(`${argument}.powerUm2`, field.powerUm2);
+  return field;
+}
+
+/** Checks that `set` is a mode set from multimodeModes: a grid and one field per mode on it. */
+function requireModeSet(set: unknown): MultimodeModeSet {
+  const s = set as MultimodeModeSet;
+  if (s === null || typeof s !== 'object' || !ArrayBuffer.isView(s.rUm) || !Array.isArray(s.modes)) throw new InputError('modes', set, 'a mode set from multimodeModes');
+  requirePositive('modes.stepUm', s.stepUm, { unit: 'µm' });
+  for (const m of s.modes) {
+    if (!m || !ArrayBuffer.isView(m.field) || m.field.length !== s.rUm.length || !Number.isInteger(m.l) || m.l < 0 || m.l > MAX_AZIMUTHAL_ORDER) {
+      throw new InputError('modes.modes', m, 'modes sampled on the set’s own grid, as multimodeModes returns them');
+    }
+  }
+  return s;
 }
 
 /** Multimode fiber described for the launch calculation. */
@@ -112,7 +145,7 @@ export function multimodeModes(fiber: MultimodeFiberSpec, wavelengthNm: number, 
       ? gradedIndexProfile({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, alpha: fiber.alpha ?? 2, claddingIndex: fiber.claddingIndex })
       : stepIndexProfile({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, claddingIndex: fiber.claddingIndex });
   // The solver is asked for at most l = 0 when only its grid is wanted (the Bessel path below).
-  const exactStep = fiber.profile === 'step' && (options.method ?? 'auto') === 'auto';
+  const exactStep = fiber.profile === 'step' && (options?.method ?? 'auto') === 'auto';
   if (exactStep) {
     const v = vNumber({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, wavelengthNm });
     if (v > MAX_EXACT_STEP_V) {
@@ -171,6 +204,11 @@ export function multimodeModes(fiber: MultimodeFiberSpec, wavelengthNm: number, 
   };
 }
 
+/** Highest azimuthal order asked of azimuthalCoefficients: above any guided l at V ≤ MAX_SOLVER_V (l < V). */
+const MAX_AZIMUTHAL_ORDER = 200;
+/** Most radii: the solver's own grid is at most 6000 cells; fieldOverlapLoss uses up to MAX_OVERLAP_CELLS. */
+const MAX_AZIMUTHAL_RADII = 50_000;
+
 /** Fewest azimuthal samples on [0, π]. */
 const MIN_PHI_SAMPLES = 32;
 /** Most azimuthal samples on [0, π] (cost guard). */
@@ -190,6 +228,14 @@ export interface AzimuthalCoefficients {
  * Trapezoid on the full circle, folded onto [0, π] by symmetry (end points weighted ½).
  */
 export function azimuthalCoefficients(f: RadialField, rUm: ArrayLike<number>, offsetUm: number, lMax: number): AzimuthalCoefficients {
+  requireRadialField('f', f);
+  if (rUm === null || typeof rUm !== 'object' || typeof rUm.length !== 'number' || rUm.length > MAX_AZIMUTHAL_RADII) {
+    throw new InputError('rUm', rUm, `a list of at most ${MAX_AZIMUTHAL_RADII} radii`);
+  }
+  for (let j = 0; j < rUm.length; j++) requireNumber(`rUm[${j}]`, rUm[j], { min: 0, max: 1e6, unit: 'µm' });
+  // Unchecked, a NaN offset threw RangeError (array length NaN) and lMax = 1e9 ran for ever.
+  requireNumber('offsetUm', offsetUm, { min: 0, max: MAX_LAUNCH_OFFSET_UM, unit: 'µm' });
+  requireInteger('lMax', lMax, 0, MAX_AZIMUTHAL_ORDER);
   const nr = rUm.length;
   const out: Float64Array[] = [];
   for (let l = 0; l <= lMax; l++) out.push(new Float64Array(nr));
@@ -267,6 +313,8 @@ export interface LaunchResult {
 export const POWER_SHARE_FOR_MODE_COUNT = 0.9;
 
 function overlapFractions(f: RadialField, set: MultimodeModeSet, offsetUm: number): number[] {
+  requireRadialField('field', f);
+  requireModeSet(set);
   const lMax = set.modes.reduce((mx, m) => Math.max(mx, m.l), 0);
   const { coefficients: coeff, ringPower } = azimuthalCoefficients(f, set.rUm, offsetUm, lMax);
   // The field's power by the same quadrature as the overlaps: then the discrete modes, orthonormal on this
@@ -332,6 +380,8 @@ function summarise(direction: LaunchResult['direction'], set: MultimodeModeSet, 
 /** Radial cells for a single-mode overlap: 400 across the narrower field's extent (≈ 90 per spot radius). */
 const OVERLAP_CELLS_PER_EXTENT = 400;
 const OVERLAP_MIN_CELLS = 200;
+/** Most cells of one overlap grid (time/memory guard): two fields up to 100× apart in size. */
+const MAX_OVERLAP_CELLS = 40_000;
 
 /** Allowed excess of the summed mode overlaps over 1 before the grid is called too coarse. */
 const OVERLAP_SUM_SLACK = 1e-3;
@@ -342,7 +392,7 @@ export const MAX_LAUNCH_OFFSET_UM = 200;
 /** Power from a single-mode field (centred, or offset by offsetUm) into each guided mode of a multimode fiber. */
 export function singleModeToMultimode(input: { source: RadialField; modes: MultimodeModeSet; offsetUm?: number }): LaunchResult {
   const d = requireNumber('offsetUm', input?.offsetUm ?? 0, { min: 0, max: MAX_LAUNCH_OFFSET_UM, unit: 'µm' });
-  const fr = overlapFractions(input.source, input.modes, d);
+  const fr = overlapFractions(input?.source, input?.modes, d);
   const total = fr.reduce((s, x) => s + x, 0);
   // Discrete FD modes obey Bessel's inequality exactly; sampled Bessel modes are orthogonal on the grid only
   // to the quadrature error (~1e-5). More than that means the grid cannot resolve this field.
@@ -365,7 +415,7 @@ export type ModePowerDistribution =
  */
 export function multimodeToSingleMode(input: { target: RadialField; modes: MultimodeModeSet; distribution: ModePowerDistribution; offsetUm?: number }): LaunchResult {
   const d = requireNumber('offsetUm', input?.offsetUm ?? 0, { min: 0, max: MAX_LAUNCH_OFFSET_UM, unit: 'µm' });
-  const set = input.modes;
+  const set = requireModeSet(input?.modes);
   const dist = input.distribution;
   const gMax = set.modes.reduce((mx, m) => Math.max(mx, m.principal), 1);
   let gLimit = gMax;
@@ -393,11 +443,16 @@ export function multimodeToSingleMode(input: { target: RadialField; modes: Multi
  */
 export function fieldOverlapLoss(f1: RadialField, f2: RadialField, offsetUm: number): { fraction: number; lossDb: number } {
   const d = requireNumber('offsetUm', offsetUm, { min: 0, max: MAX_LAUNCH_OFFSET_UM, unit: 'µm' });
+  requireRadialField('f1', f1);
+  requireRadialField('f2', f2);
   // One midpoint grid, fine against the narrower field, out to where both fields vanish. The powers are
   // taken with the same rule as the overlap so that the quadrature error cancels (identical fields give 1).
   const extent = Math.max(f1.extentUm, f2.extentUm);
   const narrow = Math.min(f1.extentUm, f2.extentUm);
   const cells = Math.max(OVERLAP_MIN_CELLS, Math.ceil((OVERLAP_CELLS_PER_EXTENT * extent) / narrow));
+  if (!(cells <= MAX_OVERLAP_CELLS)) {
+    throw new ModelError(`The two fields differ in size by a factor ${(extent / narrow).toPrecision(3)}: too much for one overlap grid.`, 'overlap integral', `fields within a factor ${MAX_OVERLAP_CELLS / OVERLAP_CELLS_PER_EXTENT} of each other in size`);
+  }
   const h = extent / cells;
   const r = new Float64Array(cells);
   for (let j = 0; j < cells; j++) r[j] = (j + 0.5) * h;

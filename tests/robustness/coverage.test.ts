@@ -17,19 +17,6 @@ function fuzzedNames(): Map<string, string> {
   return names;
 }
 
-/** Exports whose fuzz file is still being written (issue 8 in progress). Must be empty when the issue closes. */
-const PENDING = new Set<string>([
-  'azimuthalCoefficients', 'bendLoss', 'bendLossSweep', 'besselJ', 'besselJPairUnchecked', 'besselJRatioUnchecked', 'besselJZero',
-  'besselK', 'besselK01ScaledUnchecked', 'besselKLogScaledUnchecked', 'besselKScaled', 'besselKTermUnchecked', 'checkLabel',
-  'chromaticDispersion', 'criticalBendRadius', 'dispersionFiberFromNa', 'dispersionLimitedReach', 'dispersionSlope', 'dispersionSweep',
-  'equivalentStepIndex', 'fieldOverlapLoss', 'gaussianFitLp01', 'gaussianRadialField', 'linkDispersionPsPerNm', 'lp01Field',
-  'lp01RadialField', 'lp01WaveguideFunctions', 'lpBvCurve', 'lpCutoffV', 'lpFieldAt', 'lpIntensityGrid', 'lpModes', 'lpVectorModes',
-  'macNumber', 'marcuseSpotRatio', 'modeFieldDiameterUm', 'multimodeModes', 'multimodeToSingleMode', 'naFromDelta', 'numericalAperture',
-  'petermann2SpotRatio', 'relativeIndexDifference', 'requireCoreRadiusUm', 'requireNa', 'requireRefractiveIndex', 'resolveNa',
-  'singleModeCheck', 'singleModeJointComparison', 'singleModeToMultimode', 'solveLpMode', 'stressRadiusFactor', 'tabulatedRadialField',
-  'totalModeCount', 'vNumber', 'zeroDispersion',
-]);
-
 const exported = Object.entries(physics)
   .filter(([, v]) => typeof v === 'function')
   .map(([k]) => k)
@@ -40,7 +27,7 @@ describe('every exported physics function is fuzzed', () => {
   it('the physics door exports functions at all (the check below is not vacuous)', () => {
     expect(exported.length).toBeGreaterThan(50);
   });
-  it.each(exported.filter((n) => !PENDING.has(n)))('%s has a fuzz entry with 10,000 generated inputs', (name) => {
+  it.each(exported)('%s has a fuzz entry with 10,000 generated inputs', (name) => {
     expect(fuzzed.has(name), `${name} is exported from src/physics/index.ts but no tests/robustness/*.fuzz.test.ts has fuzz(M, '${name}', …)`).toBe(true);
   });
   it('every fuzz entry names a function the door still exports (no stale entries)', () => {
