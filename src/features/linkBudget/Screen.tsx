@@ -1,7 +1,7 @@
 // Link loss budget: fiber sections, connector pairs, splices, splitter, patch cords and other losses,
 // under a named rule set, with the equipment check. All arithmetic is in src/physics/linkBudget.ts.
 import { useState } from 'preact/hooks';
-import { NumberField } from '../../ui/NumberField';
+import { NumberField, NumberInput } from '../../ui/NumberField';
 import { need, useQuantity, type QuantityState } from '../../ui/useQuantity';
 import { useResult } from '../../ui/useResult';
 import { ResultCard } from '../../ui/ResultCard';
@@ -14,6 +14,7 @@ import { findPreset } from '../../fibers/presets';
 import type { ResolvedFiber } from '../../fibers/resolved';
 import {
   InputError,
+  parseQuantity,
   linkBudget,
   linkBudgetReport,
   ownRuleSet,
@@ -119,8 +120,13 @@ export default function Screen() {
     const atten = fiber.attenuationDbPerKm;
     const elements: LinkElement[] = sections.map((s, i) => {
       const argument = `section-${s.id}`;
-      const km = Number(s.lengthText.trim().replace(',', '.').replace(/\s*km$/i, ''));
-      if (s.lengthText.trim() === '' || !Number.isFinite(km)) throw new InputError(argument, s.lengthText, 'a length in km such as 2.5', `fiber section ${i + 1}`);
+      let km: number;
+      try {
+        km = parseQuantity(argument, s.lengthText, 'length').value;
+      } catch (e) {
+        if (e instanceof InputError) throw new InputError(argument, s.lengthText, 'a length such as 2.5 km or 350 m', `fiber section ${i + 1}`);
+        throw e;
+      }
       return { kind: 'fiber', label: `Fiber section ${i + 1}`, lengthKm: km, fiberClass, plant, attenuationDbPerKm: atten };
     });
     elements.push({ kind: 'connectorPair', label: 'Connector pairs', count: count(connectors) });
@@ -204,25 +210,13 @@ export default function Screen() {
           const argument = `section-${s.id}`;
           const err = budget.errorArgument === argument ? budget.error : undefined;
           return (
-            <div key={s.id} class={`field row${err ? ' field-invalid' : ''}`}>
-              <label for={argument}>Section {i + 1} length</label>
-              <div class="field-input">
-                <input
-                  id={argument}
-                  type="text"
-                  inputMode="decimal"
-                  autoComplete="off"
-                  value={s.lengthText}
-                  onInput={(e) => setSections(sections.map((x) => (x.id === s.id ? { ...x, lengthText: (e.currentTarget as HTMLInputElement).value } : x)))}
-                />
-                <span class="field-unit" aria-hidden="true">km</span>
-              </div>
+            <div key={s.id} class="row section-row">
+              <NumberInput id={argument} label={`Section ${i + 1} length`} unit="km" text={s.lengthText} onText={(t) => setSections(sections.map((x) => (x.id === s.id ? { ...x, lengthText: t } : x)))} error={err} />
               {sections.length > 1 && (
                 <button type="button" onClick={() => setSections(sections.filter((x) => x.id !== s.id))} aria-label={`Remove section ${i + 1}`}>
                   Remove
                 </button>
               )}
-              {err && <p class="field-error" role="alert">{err}</p>}
             </div>
           );
         })}

@@ -1,6 +1,6 @@
 // Optical power: dBm ⇄ mW ⇄ µW, and the power along a chain of losses (and gains).
 import { useState } from 'preact/hooks';
-import { NumberField } from '../../ui/NumberField';
+import { NumberField, NumberInput } from '../../ui/NumberField';
 import { need, useQuantity } from '../../ui/useQuantity';
 import { useResult } from '../../ui/useResult';
 import { ResultCard } from '../../ui/ResultCard';
@@ -122,22 +122,7 @@ export default function Screen() {
                 <label for={`${argument}-label`}>Name</label>
                 <input id={`${argument}-label`} type="text" value={s.label} maxLength={60} onInput={(e) => update(s.id, { label: (e.currentTarget as HTMLInputElement).value })} />
               </div>
-              <div class={`field${err ? ' field-invalid' : ''}`}>
-                <label for={`${argument}-loss`}>Loss</label>
-                <div class="field-input">
-                  <input
-                    id={`${argument}-loss`}
-                    type="text"
-                    inputMode="decimal"
-                    autoComplete="off"
-                    value={s.lossText}
-                    aria-invalid={err ? 'true' : undefined}
-                    onInput={(e) => update(s.id, { lossText: (e.currentTarget as HTMLInputElement).value })}
-                  />
-                  <span class="field-unit" aria-hidden="true">dB</span>
-                </div>
-                {err && <p class="field-error" role="alert">{err}</p>}
-              </div>
+              <NumberInput id={`${argument}-loss`} label="Loss" unit="dB" text={s.lossText} onText={(t) => update(s.id, { lossText: t })} error={err} />
               <button type="button" onClick={() => remove(s.id)} aria-label={`Remove step ${i + 1}`}>Remove</button>
             </fieldset>
           );
