@@ -122,6 +122,21 @@ function translate(e: unknown): unknown {
   return e;
 }
 
+/** A request fails with AbortError when its transaction aborts; the transaction's own error (quota) says why. */
+function causeOf(e: unknown, tx: { error: DOMException | null }): unknown {
+  return isQuotaError(tx.error) ? tx.error : e;
+}
+
+/** What browsers throw from indexedDB.open when the site may not store anything (or the API is broken). */
+function isStorageRefused(e: unknown): boolean {
+  const n = (e as { name?: string } | null)?.name;
+  return e instanceof TypeError || n === 'SecurityError' || n === 'InvalidAccessError' || n === 'NotAllowedError' || n === 'UnknownError';
+}
+
+/** Said whenever the database cannot be opened at all: the calculators work, only saving is off. */
+export const STORAGE_OFF_TEXT =
+  'Saving fiber types is off: this browser gives the app no storage for them (IndexedDB is missing or switched off, as in some private windows). The calculators still work with standard categories and typed values.';
+
 // ---------------------------------------------------------------------------------------------
 // Migrations. Each takes the versionchange transaction; the store is reached untyped because the
 // typed schema describes only the newest version.
@@ -337,8 +352,14 @@ export class FiberStore {
         throw new NotFoundError(id);
       }
       const rec = checked({ ...v.value, id, createdAt: old.createdAt, updatedAt: Math.max(nowMs, old.createdAt), nameKey: '' });
-      await tx.store.put(rec);
-      await tx.done;
+      try {
+        await tx.store.put(rec);
+        await tx.done;
+      } catch (e) {
+        // A failed request aborts its transaction; its done promise then rejects too, and must not go unhandled.
+        tx.done.catch(() => undefined);
+        throw causeOf(e, tx);
+      }
       this.changed();
       return rec;
     });
@@ -365,8 +386,14 @@ export class FiberStore {
     return this.run(async () => {
       const rec = checked(record);
       const tx = this.db.transaction('fiberTypes', 'readwrite');
-      await (how === 'add' ? tx.store.add(rec) : tx.store.put(rec));
-      await tx.done;
+      try {
+        await (how === 'add' ? tx.store.add(rec) : tx.store.put(rec));
+        await tx.done;
+      } catch (e) {
+        // A failed request aborts its transaction; its done promise then rejects too, and must not go unhandled.
+        tx.done.catch(() => undefined);
+        throw causeOf(e, tx);
+      }
       this.changed();
       return rec;
     });
@@ -391,7 +418,7 @@ export class FiberStore {
           // already aborted by the failing request
         }
         await tx.done.catch(() => undefined);
-        throw e;
+        throw causeOf(e, tx);
       }
       this.changed();
     });
@@ -423,8 +450,12 @@ const statusListeners = new Set<(s: StoreStatus, message: string) => void>();
 /** The app-wide store, opened on first use. Status changes (blocked, closed for upgrade) go to onStoreStatus listeners. */
 export function getFiberStore(): Promise<FiberStore> {
   if (!shared) {
-    if (typeof indexedDB === 'undefined') return Promise.reject(new StoreError('This browser offers no storage for saved fiber types (IndexedDB is missing or switched off).'));
-    shared = FiberStore.open({ onStatus: (s, m) => statusListeners.forEach((l) => l(s, m)) });
+    if (typeof indexedDB === 'undefined' || indexedDB === null) return Promise.reject(new StoreError(STORAGE_OFF_TEXT));
+    // An open that throws (storage refused for the site) is the same situation for the user as no
+    // IndexedDB at all; the app's own typed errors (full, closed) keep their words.
+    shared = FiberStore.open({ onStatus: (s, m) => statusListeners.forEach((l) => l(s, m)) }).catch((e: unknown) => {
+      throw isStorageRefused(e) ? new StoreError(STORAGE_OFF_TEXT) : e;
+    });
     shared.catch(() => {
       shared = undefined;
     });

@@ -155,7 +155,7 @@ export default function Screen() {
             </div>
           </div>
           {lib.records === undefined ? (
-            <p class="loading">{lib.status === 'unavailable' ? 'No saved types can be shown.' : 'Opening the library…'}</p>
+            lib.status === 'unavailable' ? <p class="note">No saved types can be shown.</p> : <p class="loading">Opening the library…</p>
           ) : lib.records.length === 0 ? (
             <p class="note">No fiber types saved yet. Add one, clone a standard category below, or load the demo library.</p>
           ) : (
