@@ -1,0 +1,238 @@
+// Issue 8, browser fuzzing in real Chromium on the production build: every text input on every screen of
+// FEATURES (and the fields the fiber picker reveals for typed values and label values) gets each hostile text
+// a person types or pastes on site. After each: no uncaught exception (pageerror), no "NaN" or "Infinity" on
+// the screen, no markup brought to life, a plain-words explanation beside a number field that cannot read it,
+// and the last good result kept — marked "Not current…" wherever the field feeds it. The good value is put
+// back between hostile ones and the result must be current again. One page per screen, reused throughout.
+// The library's form is fuzzed through its Save button: every refusal is explained and no record is written.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, BrowserContext, Page } from 'playwright-core';
+import { BUILDS, PHONE, launchBrowser, newContext, startServer, waitForScreen, type StaticServer } from './harness';
+import { FEATURES } from '../../src/features/registry';
+import { DB_NAME } from '../../src/fibers/db';
+
+/** Hostile texts; `number: false` marks the one that may legitimately read as a number (−0 → 0). */
+const HOSTILE: { label: string; text: string; number?: boolean }[] = [
+  { label: 'empty', text: '' },
+  { label: 'only spaces', text: '   ' },
+  { label: '1e309 (beyond a double)', text: '1e309' },
+  { label: '-0', text: '-0', number: true },
+  { label: 'hexadecimal 0x10', text: '0x10' },
+  { label: 'a list 1,2,3', text: '1,2,3' },
+  { label: '10,000 characters', text: '7'.repeat(10_000) },
+  { label: 'markup', text: '<img src=x onerror="window.__pwned=1">' },
+  { label: 'emoji', text: '🔥📏' },
+  { label: 'Arabic-Indic digits', text: '١٥٥٠' },
+  { label: 'right-to-left marks', text: '\u200f1550\u200f' },
+];
+/** Texts no fiber-type name may be (the others are fair names: "1,2,3", emoji and Arabic-Indic digits are). */
+const NEVER_A_NAME = new Set(['empty', 'only spaces', '10,000 characters', 'markup']);
+const SHOWS_NOT_A_NUMBER = /\bNaN\b|Infinity|undefined|\[object /;
+/** Picker sources that reveal number fields of their own. */
+const PICKER_SOURCES = ['typed', 'label'];
+
+let browser: Browser;
+let server: StaticServer;
+let context: BrowserContext;
+beforeAll(async () => {
+  server = await startServer(BUILDS.current);
+  browser = await launchBrowser();
+  context = await newContext(browser, { viewport: PHONE });
+});
+afterAll(async () => {
+  await context?.close();
+  await browser?.close();
+  await server?.close();
+});
+
+async function settle(page: Page): Promise<void> {
+  // Two frames: a worker-backed result marks itself busy only in an effect after the render.
+  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => r(null)))));
+  await page.waitForFunction(() => !document.querySelector('[aria-busy="true"]'), undefined, { timeout: 20_000 });
+}
+
+interface Snapshot {
+  text: string;
+  results: number;
+  resultText: string;
+  stale: number;
+  fieldError: string;
+  invalid: boolean;
+  pwned: boolean;
+  liveImages: number;
+}
+
+async function snapshot(page: Page, id: string): Promise<Snapshot> {
+  return page.evaluate((fieldId) => {
+    const main = document.querySelector('main') as HTMLElement;
+    const input = document.getElementById(fieldId);
+    const field = input?.closest('.field');
+    return {
+      text: main.innerText,
+      results: main.querySelectorAll('.result-card .result-body').length,
+      resultText: [...main.querySelectorAll('.result-card .result-body')].map((e) => (e as HTMLElement).innerText).join('\n'),
+      stale: main.querySelectorAll('.result-card .status-stale').length,
+      fieldError: (field?.querySelector('.field-error[role="alert"]') as HTMLElement | null)?.innerText ?? '',
+      invalid: input?.getAttribute('aria-invalid') === 'true',
+      pwned: (window as unknown as { __pwned?: unknown }).__pwned !== undefined,
+      liveImages: document.querySelectorAll('img[src="x"]').length,
+    };
+  }, id);
+}
+
+/** Ids of the visible text inputs in main (number fields and any other typed text). */
+async function visibleInputs(page: Page): Promise<{ id: string; number: boolean }[]> {
+  const all = await page.$$eval('main input:not([type]), main input[type="text"], main input[type="search"], main textarea', (els) =>
+    els.map((e) => ({ id: e.id, number: e.getAttribute('inputmode') === 'decimal', shown: (e as HTMLElement).offsetParent !== null })),
+  );
+  return all.filter((f) => f.id && f.shown).map(({ id, number }) => ({ id, number }));
+}
+
+let inputsTried = 0;
+
+/** Every hostile text into every visible input; returns the problems found (empty = all promises kept). */
+async function fuzzInputs(page: Page, where: string, done: Set<string>): Promise<string[]> {
+  const problems: string[] = [];
+  for (const { id, number } of await visibleInputs(page)) {
+    if (done.has(id)) continue;
+    done.add(id);
+    const field = page.locator(`#${id}`);
+    const good = await field.inputValue();
+    const before = await snapshot(page, id);
+    for (const h of HOSTILE) {
+      await field.fill(h.text);
+      await settle(page);
+      inputsTried++;
+      const s = await snapshot(page, id);
+      const at = `${where} #${id} given ${h.label}`;
+      if (SHOWS_NOT_A_NUMBER.test(s.text)) problems.push(`${at}: the screen shows "${s.text.match(SHOWS_NOT_A_NUMBER)![0]}"`);
+      if (s.pwned || s.liveImages > 0) problems.push(`${at}: markup came to life`);
+      if (s.results < before.results) problems.push(`${at}: a result disappeared (${before.results} → ${s.results})`);
+      const refused = s.fieldError !== '' || s.invalid;
+      if (number && !h.number && !refused) problems.push(`${at}: accepted as a number, or refused without a word beside the field`);
+      if (refused && s.fieldError.trim().length < 10) problems.push(`${at}: marked invalid but not explained beside the field`);
+      // The kept result is marked "Not current…" unless this field feeds no result (then nothing changed).
+      if (refused && before.results > 0 && s.stale === 0 && s.resultText !== before.resultText) problems.push(`${at}: result changed but is not marked as not current`);
+      if (s.stale > 0 && !/Not current/.test(s.text)) problems.push(`${at}: stale result without the words "Not current"`);
+    }
+    await field.fill(good);
+    await settle(page);
+    const back = await snapshot(page, id);
+    if (back.fieldError || back.invalid) problems.push(`${where} #${id}: restoring "${good}" still shows "${back.fieldError}"`);
+    if (back.stale > before.stale) problems.push(`${where} #${id}: restoring "${good}" leaves the result not current`);
+    if (back.resultText !== before.resultText) problems.push(`${where} #${id}: restoring "${good}" does not give the same result again`);
+  }
+  return problems;
+}
+
+async function openPage(id: string): Promise<{ page: Page; errors: string[] }> {
+  const page = await context.newPage();
+  const errors: string[] = [];
+  page.on('pageerror', (e) => errors.push(e.message));
+  await page.goto(`${server.url}#/${id}`);
+  await waitForScreen(page);
+  await settle(page);
+  return { page, errors };
+}
+
+const CALCULATORS = FEATURES.filter((f) => f.id !== 'library');
+
+describe.each(CALCULATORS.map((f) => ({ id: f.id, title: f.title })))('hostile text on the $title screen', ({ id, title }) => {
+  it('every input survives every hostile text: explained, no NaN, last good result kept and marked not current', { timeout: 600_000 }, async () => {
+    const { page, errors } = await openPage(id);
+    try {
+      const done = new Set<string>();
+      const problems = await fuzzInputs(page, title, done);
+      // The fiber picker's own fields, for a fiber typed in and for label values.
+      for (const select of await page.$$eval('main select[id$="-source"]', (els) => els.map((e) => e.id))) {
+        const sources = await page.$$eval(`#${select} option`, (os) => os.map((o) => (o as HTMLOptionElement).value));
+        for (const source of sources.filter((s) => PICKER_SOURCES.includes(s))) {
+          await page.selectOption(`#${select}`, source);
+          await settle(page);
+          problems.push(...(await fuzzInputs(page, `${title} (${select} = ${source})`, done)));
+        }
+      }
+      expect(done.size, 'the screen has inputs to fuzz').toBeGreaterThan(0);
+      expect(problems, 'problems found').toEqual([]);
+      expect(errors, 'uncaught exceptions in the page').toEqual([]);
+    } finally {
+      await page.close();
+    }
+  });
+});
+
+async function libraryCount(page: Page): Promise<number> {
+  return page.evaluate(
+    (name) =>
+      new Promise<number>((resolve, reject) => {
+        const req = indexedDB.open(name);
+        req.onerror = () => reject(req.error);
+        req.onsuccess = () => {
+          const db = req.result;
+          const tx = db.transaction('fiberTypes', 'readonly');
+          const c = tx.objectStore('fiberTypes').count();
+          c.onsuccess = () => {
+            db.close();
+            resolve(c.result);
+          };
+          c.onerror = () => reject(c.error);
+        };
+      }),
+    DB_NAME,
+  );
+}
+
+describe('hostile text in the fiber library form', () => {
+  it('each form field refuses each hostile text with an explanation on Save, and nothing is written', { timeout: 600_000 }, async () => {
+    const { page, errors } = await openPage('library');
+    try {
+      await page.getByRole('button', { name: 'Add a fiber type' }).click();
+      await page.locator('#ff-name').waitFor();
+      const before = await libraryCount(page);
+      const fields = (await visibleInputs(page)).filter((f) => f.id.startsWith('ff-') && f.id !== 'ff-notes');
+      expect(fields.length).toBeGreaterThan(3);
+      // A valid step-index type first, so that a refusal can only come from the field under test.
+      await page.locator('#ff-name').fill('Fuzz reference reel');
+      await page.locator('#ff-core').fill('8.2');
+      await page.locator('#ff-na').fill('0.14');
+      const problems: string[] = [];
+      for (const { id } of fields) {
+        const field = page.locator(`#${id}`);
+        const good = await field.inputValue();
+        for (const h of HOSTILE) {
+          // An optional field (empty by default) may be left empty or blank: that is its good value.
+          if (good === '' && h.text.trim() === '') continue;
+          // "-0" can be a fair 0 (an attenuation); a name may be "1,2,3" or emoji: only what no name may be is tried.
+          if (h.number) continue;
+          if (id === 'ff-name' && !NEVER_A_NAME.has(h.label)) continue;
+          await field.fill(h.text);
+          inputsTried++;
+          await page.getByRole('button', { name: 'Save', exact: true }).click();
+          await settle(page);
+          const text = await page.locator('main').innerText();
+          if (SHOWS_NOT_A_NUMBER.test(text)) problems.push(`#${id} given ${h.label}: the screen shows "${text.match(SHOWS_NOT_A_NUMBER)![0]}"`);
+          if (await page.evaluate(() => (window as unknown as { __pwned?: unknown }).__pwned !== undefined || !!document.querySelector('img[src="x"]'))) problems.push(`#${id} given ${h.label}: markup came to life`);
+          const stillInForm = await page.locator('#ff-name').isVisible();
+          if (!stillInForm) {
+            problems.push(`#${id} given ${h.label}: saved a fiber type`);
+            break;
+          }
+          const alerts = await page.locator('form [role="alert"]').allInnerTexts();
+          if (alerts.join(' ').trim().length < 10 && !h.number) problems.push(`#${id} given ${h.label}: not saved, but no explanation`);
+        }
+        if (!(await page.locator('#ff-name').isVisible())) break;
+        await field.fill(good);
+      }
+      if (await page.locator('#ff-name').isVisible()) await page.getByRole('button', { name: 'Cancel' }).click();
+      expect(await libraryCount(page), 'records in the library').toBe(before);
+      expect(problems, 'problems found').toEqual([]);
+      expect(errors, 'uncaught exceptions in the page').toEqual([]);
+    } finally {
+      await page.close();
+    }
+  });
+});
+
+afterAll(() => {
+  console.log(`browser fuzz: ${inputsTried} hostile texts typed into inputs`);
+});
