@@ -437,11 +437,11 @@ function backupFile(records: Record<string, unknown>[]): string {
 }
 
 /** An invented batch of distinct step-index types, each valid, with known content. */
-function importBatch(n: number): Record<string, unknown>[] {
+function importBatch(n: number, tag = 'a'): Record<string, unknown>[] {
   const t0 = Date.UTC(2026, 0, 5);
   return Array.from({ length: n }, (_, i) => ({
-    id: `imp_${String(i).padStart(4, '0')}`,
-    name: `Wick marsh reel ${i}`,
+    id: `imp_${tag}_${String(i).padStart(4, '0')}`,
+    name: `Wick marsh reel ${tag}-${i}`,
     profile: 'step',
     coreDiameterUm: 8 + (i % 50) / 100,
     claddingDiameterUm: 125,
@@ -453,77 +453,134 @@ function importBatch(n: number): Record<string, unknown>[] {
   }));
 }
 
+// When the tab goes matters: right at the click, the write has not begun; later it is under way or
+// done. Several moments in one profile, so at least some closes land while the transaction runs.
+const IMPORT_CLOSE_DELAYS_MS = [0, 10, 30, 60, 120, 250, 500];
+const SAVE_CLOSE_DELAYS_MS = [0, 5, 20, 50];
+const BATCH_SIZE = 600;
+
 describe('the tab is closed during a save', () => {
-  it('closing the tab right after confirming an import of 600 types: on reopening the library holds either all of them or none, each complete, and the earlier types unchanged', async () => {
+  it(`closing the tab 0 to 500 ms after confirming an import of ${BATCH_SIZE} types, and halfway through its writes: on reopening the library holds either all of them or none, each complete, and the earlier types unchanged`, async () => {
     const server = await serve();
     const p = await profile();
-    await openLibrary(p.page, server.url);
-    await saveThreeTypes(p.page);
-    const before = await storedRecords(p.page);
-    const batch = importBatch(600);
-
-    await p.page.locator('.backup input[type="file"]').setInputFiles({ name: 'reels.json', mimeType: 'application/json', buffer: Buffer.from(backupFile(batch)) });
-    const confirm = p.page.getByRole('button', { name: 'Import 600 types' });
-    await confirm.waitFor();
-    await confirm.click();
-    await p.page.close({ runBeforeUnload: false });
-
-    const page = await p.context.newPage();
-    const errors = watchPageErrors(page);
+    // Counts the writes issued on the page; when asked, write number __stallAt stalls the page for
+    // 3 s (a slow phone), so the last round closes the tab for certain in the middle of the
+    // import's one transaction, with half of its writes issued.
+    await p.context.addInitScript(() => {
+      const w = window as unknown as { __puts: number; __stallAt?: number };
+      w.__puts = 0;
+      const put = IDBObjectStore.prototype.put;
+      IDBObjectStore.prototype.put = function (this: IDBObjectStore, ...args: Parameters<IDBObjectStore['put']>) {
+        const request = put.apply(this, args);
+        if (++w.__puts === w.__stallAt) {
+          console.info('modewright-test: write stalled');
+          const until = performance.now() + 3000;
+          while (performance.now() < until) {
+            // busy: the page does nothing else until the tab is closed
+          }
+        }
+        return request;
+      };
+    });
+    let page = p.page;
     await openLibrary(page, server.url);
-    await page.locator('.fiber-list').waitFor();
-    const after = await storedRecords(page);
-    const earlier = after.filter((r) => !r.id.startsWith('imp_'));
-    const imported = after.filter((r) => r.id.startsWith('imp_'));
-    expect([0, batch.length], `one transaction: all or none (got ${imported.length})`).toContain(imported.length);
-    const compared = expectSameRecords(earlier, before, 'tab closed during import');
-    const byId = new Map(batch.map((r) => [r.id as string, r]));
-    for (const r of imported) {
-      const { nameKey, ...rest } = r;
-      expect(rest, `imported ${r.id} complete`).toEqual(byId.get(r.id));
-      expect(nameKey).toBe((r.name as string).toLowerCase());
+    await saveThreeTypes(page);
+    let expected = await storedRecords(page);
+    const outcomes: string[] = [];
+    let compared = 0;
+    const rounds = [
+      ...IMPORT_CLOSE_DELAYS_MS.map((ms) => ({ when: `${ms} ms`, wait: (pg: Page) => pg.waitForTimeout(ms), stallAt: undefined as number | undefined })),
+      {
+        when: `while write ${BATCH_SIZE / 2} of ${BATCH_SIZE} stalls`,
+        wait: async (pg: Page) => {
+          await pg.waitForEvent('console', { predicate: (m) => m.text() === 'modewright-test: write stalled', timeout: 30_000 });
+        },
+        stallAt: BATCH_SIZE / 2,
+      },
+    ];
+
+    for (const [round, { when, wait, stallAt }] of rounds.entries()) {
+      const tag = `r${round}`;
+      const batch = importBatch(BATCH_SIZE, tag);
+      await page.locator('.backup input[type="file"]').setInputFiles({ name: 'reels.json', mimeType: 'application/json', buffer: Buffer.from(backupFile(batch)) });
+      await page.evaluate((at) => Object.assign(window, { __puts: 0, __stallAt: at }), stallAt);
+      const confirm = page.getByRole('button', { name: `Import ${BATCH_SIZE} types` });
+      // A stalled page cannot answer the click's own follow-up checks; dispatch it and move on.
+      await (stallAt ? confirm.dispatchEvent('click') : confirm.click());
+      await wait(page);
+      await page.close({ runBeforeUnload: false });
+
+      page = await p.context.newPage();
+      const errors = watchPageErrors(page);
+      await openLibrary(page, server.url);
+      await page.locator('.fiber-list').waitFor();
+      const after = await storedRecords(page);
+      const landed = after.filter((r) => r.id.startsWith(`imp_${tag}_`));
+      expect([0, batch.length], `closed ${when}: one transaction, all or none (got ${landed.length})`).toContain(landed.length);
+      compared += expectSameRecords(after.filter((r) => !r.id.startsWith(`imp_${tag}_`)), expected, `tab closed ${when} into an import`);
+      const byId = new Map(batch.map((r) => [r.id as string, r]));
+      for (const r of landed) {
+        const { nameKey, ...rest } = r;
+        expect(rest, `imported ${r.id} complete`).toEqual(byId.get(r.id));
+        expect(nameKey).toBe(r.name.toLowerCase());
+      }
+      compared += landed.length;
+      expect(await page.locator('.fiber-list .fiber-item').count()).toBe(after.length);
+      expect(errors).toEqual([]);
+      outcomes.push(`${when}: ${landed.length ? 'all' : 'none'}`);
+      expected = after;
     }
-    expect(await page.locator('.fiber-list .fiber-item').count()).toBe(after.length);
-    expect(errors).toEqual([]);
-    console.info(`tab closed during import: ${imported.length === 0 ? 'none' : 'all'} landed; ${compared + imported.length} records compared`);
+    console.info(`tab closed during import: ${outcomes.join(', ')}; ${compared} records compared`);
   });
 
-  it('closing the tab right after pressing Save: the new type is either fully there or not there, and the earlier types unchanged', async () => {
+  it('closing the tab 0 to 50 ms after pressing Save: the new type is either fully there or not there, and the earlier types unchanged', async () => {
     const server = await serve();
     const p = await profile();
-    await openLibrary(p.page, server.url);
-    await saveThreeTypes(p.page);
-    const before = await storedRecords(p.page);
-
-    await fillStepType(p.page, 'Closed mid-save', '9.2', '0.135');
-    await p.page.locator('#ff-cutoff').fill('1260');
-    await p.page.locator('#ff-cutoff-kind').selectOption('cable');
-    await p.page.getByRole('button', { name: 'Save', exact: true }).click();
-    await p.page.close({ runBeforeUnload: false });
-
-    const page = await p.context.newPage();
-    const errors = watchPageErrors(page);
+    let page = p.page;
     await openLibrary(page, server.url);
-    await page.locator('.fiber-list').waitFor();
-    const after = await storedRecords(page);
-    const beforeIds = new Set(before.map((r) => r.id));
-    const added = after.filter((r) => !beforeIds.has(r.id));
-    expect(added.length, 'at most the one new record').toBeLessThanOrEqual(1);
-    const compared = expectSameRecords(after.filter((r) => beforeIds.has(r.id)), before, 'tab closed during save');
-    for (const r of added) {
-      expect(r).toMatchObject({
-        name: 'Closed mid-save',
-        nameKey: 'closed mid-save',
-        profile: 'step',
-        coreDiameterUm: 9.2,
-        na: 0.135,
-        claddingDiameterUm: 125,
-        cutoffWavelengthNm: 1260,
-        cutoffKind: 'cable',
-      });
-      expect(r.createdAt).toBe(r.updatedAt);
+    await saveThreeTypes(page);
+    let expected = await storedRecords(page);
+    const outcomes: string[] = [];
+    let compared = 0;
+
+    for (const [round, delayMs] of SAVE_CLOSE_DELAYS_MS.entries()) {
+      const name = `Closed mid-save ${round}`;
+      await fillStepType(page, name, '9.2', '0.135');
+      await page.locator('#ff-cutoff').fill('1260');
+      await page.locator('#ff-cutoff-kind').selectOption('cable');
+      await page.getByRole('button', { name: 'Save', exact: true }).click();
+      if (delayMs) await page.waitForTimeout(delayMs);
+      await page.close({ runBeforeUnload: false });
+
+      page = await p.context.newPage();
+      const errors = watchPageErrors(page);
+      await openLibrary(page, server.url);
+      await page.locator('.fiber-list').waitFor();
+      const after = await storedRecords(page);
+      const knownIds = new Set(expected.map((r) => r.id));
+      const added = after.filter((r) => !knownIds.has(r.id));
+      expect(added.length, `closed after ${delayMs} ms: at most the one new record`).toBeLessThanOrEqual(1);
+      compared += expectSameRecords(after.filter((r) => knownIds.has(r.id)), expected, `tab closed ${delayMs} ms into a save`);
+      for (const r of added) {
+        expect(r).toMatchObject({
+          name,
+          nameKey: name.toLowerCase(),
+          profile: 'step',
+          coreDiameterUm: 9.2,
+          na: 0.135,
+          claddingDiameterUm: 125,
+          cutoffWavelengthNm: 1260,
+          cutoffKind: 'cable',
+          attenuation: [],
+          notes: '',
+        });
+        expect(r.createdAt).toBe(r.updatedAt);
+      }
+      compared += added.length;
+      expect(errors).toEqual([]);
+      outcomes.push(`${delayMs} ms: ${added.length ? 'saved' : 'not saved'}`);
+      expected = after;
     }
-    expect(errors).toEqual([]);
-    console.info(`tab closed during save: ${added.length ? 'saved' : 'not saved'}; ${compared + added.length} records compared`);
+    console.info(`tab closed during save: ${outcomes.join(', ')}; ${compared} records compared`);
   });
 });
