@@ -38,11 +38,12 @@ export const VISIBLE_MAX_NM = 700;
 /** The usual cautions for fiber work (common practice). Always shown, at every power. */
 export const USUAL_LASER_CAUTIONS: readonly string[] = [
   'Never look into a fiber end, a connector, an adapter or an equipment port, lit or not, with or without magnification.',
-  'Inspect end faces only with a fiber inspection scope that has a laser filter, or with a video (camera) probe.',
+  'Inspect end faces only with a fiber inspection scope that has a laser filter, or with a camera probe that shows the end face on a screen.',
   'Treat every fiber as live until a power meter has proven it dark; a far-end transmitter or amplifier can switch on at any time.',
   'Connect the light source last and disconnect it first; cap every unused connector and adapter.',
   'Never use a magnifier, microscope without filter, or binoculars near an open fiber end: optics gather the light into the eye.',
-  'Fiber shards pierce skin and eyes: wear safety glasses, put offcuts in a marked shard container, never on the floor, and do not eat or drink at the work area.',
+  'Fiber shards pierce skin and eyes: wear safety glasses, work over a dark mat, put offcuts in a marked shard container, never on the floor or clothing, and do not eat or drink at the work area.',
+  'Cleavers and strippers are sharp: keep blades covered when not in use.',
 ];
 
 /** Who decides. Shown with every result. */

@@ -63,7 +63,7 @@ describe('wording guarantees', () => {
   it('the cautions name the inspection scope with a filter, live fibers and shards', () => {
     const text = USUAL_LASER_CAUTIONS.join(' ');
     expect(text).toMatch(/never look into a fiber end/i);
-    expect(text).toMatch(/inspection scope that has a laser filter|video \(camera\) probe/i);
+    expect(text).toMatch(/inspection scope that has a laser filter|camera probe that shows the end face on a screen/i);
     expect(text).toMatch(/treat every fiber as live/i);
     expect(text).toMatch(/shards/i);
   });
