@@ -1,5 +1,8 @@
 import type { QuantityState } from './useQuantity';
 
+/** The wavelengths field equipment commonly runs at, offered as quick picks (common practice). */
+export const OPERATING_WAVELENGTHS_NM: readonly number[] = [850, 1300, 1310, 1490, 1550, 1625];
+
 export interface NumberInputProps {
   /** The input's id; the explanation beside it is `${id}-err`, the conversion `${id}-conv`. */
   id: string;
@@ -13,7 +16,7 @@ export interface NumberInputProps {
   /** Conversion note, e.g. "350 m = 0.35 km". */
   conversion?: string;
   /** Common values offered as one-tap buttons, in `unit`. */
-  quickPicks?: number[];
+  quickPicks?: readonly number[];
   /** Text on a quick-pick button when "value unit" reads wrong, e.g. "1 turn". */
   quickPickLabel?: (value: number) => string;
   /** The current value, to mark the quick pick that matches it. */

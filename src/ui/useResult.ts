@@ -34,3 +34,11 @@ export function useResult<R>(compute: () => R, deps: unknown[]): ResultState<R> 
     }
   }, deps);
 }
+
+/**
+ * The error line of a result card. When the error names a field on the screen, that field
+ * already explains it, so the card points there instead of saying it twice.
+ */
+export function cardError(state: Pick<ResultState<unknown>, 'error' | 'errorArgument'>, fieldArguments: readonly string[]): string | undefined {
+  return state.errorArgument !== undefined && fieldArguments.includes(state.errorArgument) ? 'Check the value marked above.' : state.error;
+}

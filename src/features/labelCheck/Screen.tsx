@@ -1,8 +1,8 @@
 // Check a label: the inspector's flow. The label's cutoff (cable or fiber) and mode field diameter,
 // and the system wavelength, give a verdict with its reasons in plain words.
-import { NumberField } from '../../ui/NumberField';
+import { NumberField, OPERATING_WAVELENGTHS_NM } from '../../ui/NumberField';
 import { need, useQuantity } from '../../ui/useQuantity';
-import { useResult } from '../../ui/useResult';
+import { useResult, cardError } from '../../ui/useResult';
 import { ResultCard } from '../../ui/ResultCard';
 import { HowComputed } from '../../ui/HowComputed';
 import { formatNumber } from '../../ui/format';
@@ -16,7 +16,6 @@ import {
   type LabelVerdict,
 } from '../../physics';
 
-const QUICK_WAVELENGTHS_NM = [850, 1300, 1310, 1490, 1550, 1625];
 
 const VERDICT: Record<LabelVerdict, { words: string; css: string }> = {
   'single-mode': { words: 'Single-mode at this wavelength', css: 'verdict-ok' },
@@ -25,9 +24,6 @@ const VERDICT: Record<LabelVerdict, { words: string; css: string }> = {
 };
 
 /** A field's own error is shown beside the field; the card then only points to it. */
-function cardError(state: { error?: string; errorArgument?: string }): string | undefined {
-  return state.errorArgument === 'wavelengthNm' ? 'Check the value marked above.' : state.error;
-}
 
 export default function Screen() {
   const picker = useFiberPicker({ id: 'label-check', label: 'The label', kinds: ['single-mode'], defaultCategory: 'G.652.D' });
@@ -72,10 +68,10 @@ export default function Screen() {
       <p class="note">Type the values printed on the label or data sheet under “A label” in the fiber choice, or pick a category to check its limits.</p>
       {picker.element}
       <div class="form">
-        <NumberField q={wavelength} label="System wavelength" unit="nm" quickPicks={QUICK_WAVELENGTHS_NM} calc={calc} />
+        <NumberField q={wavelength} label="System wavelength" unit="nm" quickPicks={OPERATING_WAVELENGTHS_NM} calc={calc} />
       </div>
 
-      <ResultCard title="Verdict" stale={state.stale} error={cardError(state)} copyText={copy || undefined}>
+      <ResultCard title="Verdict" stale={state.stale} error={cardError(state, ['wavelengthNm'])} copyText={copy || undefined}>
         {r && (
           <>
             <p class={VERDICT[r.verdict].css}>{VERDICT[r.verdict].words}</p>

@@ -3,7 +3,7 @@
 import { Fragment } from 'preact';
 import { NumberField } from '../../ui/NumberField';
 import { need, useQuantity } from '../../ui/useQuantity';
-import { useResult } from '../../ui/useResult';
+import { useResult, cardError } from '../../ui/useResult';
 import { ResultCard } from '../../ui/ResultCard';
 import { HowComputed } from '../../ui/HowComputed';
 import { LinePlot } from '../../ui/Plot';
@@ -23,9 +23,6 @@ const WORDS: Record<ModeFieldDiameter['definition'], { title: string; what: stri
 };
 
 /** A field's own error is shown beside the field; the card then only points to it. */
-function cardError(state: { error?: string; errorArgument?: string }): string | undefined {
-  return state.errorArgument === 'wavelengthNm' ? 'Check the value marked above.' : state.error;
-}
 
 export default function Screen() {
   const picker = useFiberPicker({ id: 'mode-field', label: 'Single-mode fiber type', kinds: ['single-mode'], defaultCategory: 'G.652.D' });
@@ -78,7 +75,7 @@ export default function Screen() {
         <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={QUICK_WAVELENGTHS_NM} calc={calc} />
       </div>
 
-      <ResultCard title="Mode field diameter, three ways" stale={state.stale} error={cardError(state)} copyText={copy || undefined}>
+      <ResultCard title="Mode field diameter, three ways" stale={state.stale} error={cardError(state, ['wavelengthNm'])} copyText={copy || undefined}>
         {r && (
           <>
             {vNote && (

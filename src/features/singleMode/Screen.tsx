@@ -1,9 +1,9 @@
 // Single-mode check: is this fiber single-mode at this wavelength? V-number, verdict, distance to the
 // LP11 cutoff, the guided LP modes with their vector families, a b–V diagram and a mode picture.
 import { useState } from 'preact/hooks';
-import { NumberField } from '../../ui/NumberField';
+import { NumberField, OPERATING_WAVELENGTHS_NM } from '../../ui/NumberField';
 import { need, useQuantity } from '../../ui/useQuantity';
-import { useResult } from '../../ui/useResult';
+import { useResult, cardError } from '../../ui/useResult';
 import { ResultCard } from '../../ui/ResultCard';
 import { HowComputed } from '../../ui/HowComputed';
 import { LinePlot } from '../../ui/Plot';
@@ -13,7 +13,6 @@ import { useFiberPicker } from '../../ui/FiberPicker';
 import { InputError, LP11_CUTOFF_V, lpBvCurve, lpCutoffV, singleModeCheck, type LPMode } from '../../physics';
 import { ModePicture } from './ModePicture';
 
-const QUICK_WAVELENGTHS_NM = [850, 1300, 1310, 1490, 1550, 1625];
 /** LP families drawn on the b–V diagram: the first five to appear as V grows (one line style each). */
 const DIAGRAM_FAMILIES: [number, number][] = [[0, 1], [1, 1], [2, 1], [0, 2], [3, 1]];
 /** The mode table lists this many modes; the rest are counted. */
@@ -22,9 +21,6 @@ const TABLE_ROWS = 40;
 const name = (m: { l: number; m: number }) => `LP${m.l}${m.m}`;
 
 /** A field's own error is shown beside the field; the card then only points to it. */
-function cardError(state: { error?: string; errorArgument?: string }): string | undefined {
-  return state.errorArgument === 'wavelengthNm' ? 'Check the value marked above.' : state.error;
-}
 
 export default function Screen() {
   const picker = useFiberPicker({ id: 'single-mode', label: 'Fiber type', kinds: ['single-mode', 'multimode'], defaultCategory: 'G.652.D' });
@@ -87,10 +83,10 @@ export default function Screen() {
       <h2>Fiber and wavelength</h2>
       {picker.element}
       <div class="form">
-        <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={QUICK_WAVELENGTHS_NM} calc={calc} />
+        <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={OPERATING_WAVELENGTHS_NM} calc={calc} />
       </div>
 
-      <ResultCard title="Single-mode check" stale={state.stale} error={cardError(state)} copyText={copy || undefined}>
+      <ResultCard title="Single-mode check" stale={state.stale} error={cardError(state, ['wavelengthNm'])} copyText={copy || undefined}>
         {r && (
           <>
             <p class={verdict.css}>{verdict.words}</p>
