@@ -4,52 +4,19 @@
 // fault: the calculators keep working, the app says what happened in plain words, and no saved
 // fiber type is lost or corrupted. Each test reads the whole library straight from IndexedDB before
 // and after and compares it record by record (id, name, updatedAt, and every other field).
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
-import {
-  BUILDS,
-  CHROMIUM_ARGS,
-  CHROMIUM_PATH,
-  PHONE,
-  freshProfile,
-  startServer,
-  waitForScreen,
-  waitForServiceWorkerControl,
-  type FreshProfile,
-  type StaticServer,
-} from './harness';
+import { BUILDS, CHROMIUM_ARGS, CHROMIUM_PATH, closedAfterEach, PHONE, UPDATE_OFFER, waitForScreen, waitForServiceWorkerControl } from './harness';
 import { DB_NAME } from '../../src/fibers/db';
 import { BACKUP_FORMAT_ID, BACKUP_FORMAT_VERSION } from '../../src/fibers/backup';
 
-const UPDATE_OFFER = 'A new version is ready — reload to update.';
 
-let cleanups: (() => Promise<void>)[] = [];
-afterEach(async () => {
-  for (const c of cleanups.reverse()) await c();
-  cleanups = [];
-});
+const { serve, profile, later } = closedAfterEach();
 
-async function serve(dir = BUILDS.current): Promise<StaticServer> {
-  const s = await startServer(dir);
-  let closed = false;
-  const close = s.close.bind(s);
-  s.close = async () => {
-    if (closed) return;
-    closed = true;
-    await close();
-  };
-  cleanups.push(() => s.close());
-  return s;
-}
 
-async function profile(): Promise<FreshProfile> {
-  const p = await freshProfile();
-  cleanups.push(() => p.close());
-  return p;
-}
 
 /**
  * One user-data-dir that can be closed and opened again: the same phone, with the browser quit
@@ -58,7 +25,7 @@ async function profile(): Promise<FreshProfile> {
 function reusableProfile(): { open(): Promise<BrowserContext> } {
   const dir = mkdtempSync(join(tmpdir(), 'modewright-fault-profile-'));
   let current: BrowserContext | undefined;
-  cleanups.push(async () => {
+  later(async () => {
     await current?.close().catch(() => undefined);
     rmSync(dir, { recursive: true, force: true });
   });

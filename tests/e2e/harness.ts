@@ -8,6 +8,7 @@ import { extname, join, resolve, sep } from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { afterEach } from 'vitest';
 
 export const REPO_ROOT = fileURLToPath(new URL('../../', import.meta.url));
 
@@ -271,4 +272,52 @@ export async function waitForScreen(page: Page): Promise<void> {
     // The title and something after it: the screen's own content, not just the frame.
     return !!main.querySelector('h1 ~ *');
   });
+}
+
+/** The update prompt's words (src/pwa/UpdatePrompt.tsx), as the update tests look for them. */
+export const UPDATE_OFFER = 'A new version is ready — reload to update.';
+
+export interface TestResources {
+  /** A static server for a build, closed after the test (closing it early, mid-test, is fine). */
+  serve(dir?: string): Promise<StaticServer>;
+  /** A fresh browser profile, closed and deleted after the test. */
+  profile(opts?: ContextOptions): Promise<FreshProfile>;
+  /** Anything else to close or delete after the test. */
+  later(close: () => Promise<void>): void;
+}
+
+/**
+ * Call once at the top of a test file: what each test opens through the returned helpers is
+ * closed after that test, newest first, whether the test passed or failed.
+ */
+export function closedAfterEach(): TestResources {
+  let cleanups: (() => Promise<void>)[] = [];
+  afterEach(async () => {
+    const todo = cleanups.reverse();
+    cleanups = [];
+    for (const c of todo) await c();
+  });
+  const later = (close: () => Promise<void>) => {
+    cleanups.push(close);
+  };
+  return {
+    later,
+    async serve(dir = BUILDS.current) {
+      const s = await startServer(dir);
+      let closed = false;
+      const close = s.close.bind(s);
+      s.close = async () => {
+        if (closed) return;
+        closed = true;
+        await close();
+      };
+      later(() => s.close());
+      return s;
+    },
+    async profile(opts = {}) {
+      const p = await freshProfile(opts);
+      later(() => p.close());
+      return p;
+    },
+  };
 }

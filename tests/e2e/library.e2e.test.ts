@@ -1,28 +1,14 @@
 // The fiber library in real Chromium: IndexedDB, the service worker and the DOM are what only a
 // browser can show. Saved types survive an offline reload; two tabs during a schema upgrade keep
 // every record; a name with markup characters is shown as text, never interpreted.
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { BUILDS, freshProfile, startServer, waitForScreen, waitForServiceWorkerControl, type FreshProfile, type StaticServer } from './harness';
+import { closedAfterEach, waitForScreen, waitForServiceWorkerControl } from './harness';
 import { DB_NAME, SCHEMA_VERSION } from '../../src/fibers/db';
 
-let cleanups: (() => Promise<void>)[] = [];
-afterEach(async () => {
-  for (const c of cleanups.reverse()) await c();
-  cleanups = [];
-});
+const { serve, profile } = closedAfterEach();
 
-async function serve(): Promise<StaticServer> {
-  const s = await startServer(BUILDS.current);
-  cleanups.push(() => s.close());
-  return s;
-}
 
-async function profile(): Promise<FreshProfile> {
-  const p = await freshProfile();
-  cleanups.push(() => p.close());
-  return p;
-}
 
 async function openLibrary(page: Page, url: string): Promise<void> {
   await page.goto(`${url}#/library`);

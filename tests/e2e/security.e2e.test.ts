@@ -2,30 +2,16 @@
 // A backup file is the one way data from elsewhere enters the app: names and notes in it that
 // look like markup or script must only ever be shown as text, never run. And should anything
 // slip past that, the built page's policy must refuse to run script that is not a file of the app.
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import { BUILDS, freshProfile, startServer, waitForScreen, type FreshProfile, type StaticServer } from './harness';
+import { BUILDS, closedAfterEach, waitForScreen } from './harness';
 import { BACKUP_FORMAT_ID, BACKUP_FORMAT_VERSION } from '../../src/fibers/backup';
 
-let cleanups: (() => Promise<void>)[] = [];
-afterEach(async () => {
-  for (const c of cleanups.reverse()) await c();
-  cleanups = [];
-});
+const { serve, profile } = closedAfterEach();
 
-async function serve(): Promise<StaticServer> {
-  const s = await startServer(BUILDS.current);
-  cleanups.push(() => s.close());
-  return s;
-}
 
-async function profile(): Promise<FreshProfile> {
-  const p = await freshProfile();
-  cleanups.push(() => p.close());
-  return p;
-}
 
 type Flags = { __pwned?: unknown; __inline?: unknown; __attr?: unknown; __eval?: unknown };
 
@@ -185,8 +171,7 @@ describe('the content-security policy is enforced', () => {
 
   it('check of the check: with the policy bypassed, the same injected script and handler do run', async () => {
     const server = await serve();
-    const p = await freshProfile({ bypassCSP: true });
-    cleanups.push(() => p.close());
+    const p = await profile({ bypassCSP: true });
     await p.page.goto(`${server.url}#/`);
     await waitForScreen(p.page);
     await p.page.evaluate(() => {

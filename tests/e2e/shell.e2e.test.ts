@@ -1,44 +1,17 @@
 // The installable offline shell, in real Chromium against production builds:
 // offline start after one visit, the update offer, no request to another origin,
 // and Chromium's own installability verdict.
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
-import {
-  BUILDS,
-  freshProfile,
-  launchBrowser,
-  newContext,
-  startServer,
-  waitForScreen,
-  waitForServiceWorkerControl,
-  watchCspViolations,
-  watchForeignRequests,
-  type FreshProfile,
-  type StaticServer,
-} from './harness';
+import { BUILDS, closedAfterEach, launchBrowser, newContext, UPDATE_OFFER, waitForScreen, waitForServiceWorkerControl, watchCspViolations, watchForeignRequests, type FreshProfile, type StaticServer } from './harness';
 import { FEATURES } from '../../src/features/registry';
 
-const UPDATE_OFFER = 'A new version is ready — reload to update.';
 
-let cleanups: (() => Promise<void>)[] = [];
-afterEach(async () => {
-  for (const c of cleanups.reverse()) await c();
-  cleanups = [];
-});
+const { serve, profile, later } = closedAfterEach();
 
-async function serve(dir: string): Promise<StaticServer> {
-  const s = await startServer(dir);
-  cleanups.push(() => s.close());
-  return s;
-}
 
-async function profile(): Promise<FreshProfile> {
-  const p = await freshProfile();
-  cleanups.push(() => p.close());
-  return p;
-}
 
 async function buildIdShown(page: Page): Promise<string> {
   return (await page.locator('[data-build-id]').textContent())?.trim() ?? '';
@@ -181,7 +154,7 @@ describe('nothing leaves the app’s origin', () => {
   it('a walk through every screen, by links and the back button, requests nothing from another origin and trips no security policy', async () => {
     const server = await serve(BUILDS.current);
     const browser = await launchBrowser();
-    cleanups.push(() => browser.close());
+    later(() => browser.close());
     const context = await newContext(browser);
     const requests = watchForeignRequests(context, server.origin);
     const csp = await watchCspViolations(context);
@@ -206,7 +179,7 @@ describe('nothing leaves the app’s origin', () => {
   it('the request watcher does see a request to another origin (check of the check)', async () => {
     const server = await serve(BUILDS.current);
     const browser = await launchBrowser();
-    cleanups.push(() => browser.close());
+    later(() => browser.close());
     const context = await newContext(browser, { bypassCSP: true });
     const requests = watchForeignRequests(context, server.origin);
     const page = await context.newPage();
@@ -226,7 +199,7 @@ describe('nothing leaves the app’s origin', () => {
 
     const server = await serve(BUILDS.current);
     const browser = await launchBrowser();
-    cleanups.push(() => browser.close());
+    later(() => browser.close());
     const context = await newContext(browser);
     const csp = await watchCspViolations(context);
     const page = await context.newPage();
