@@ -2,7 +2,8 @@
 // start bundle stays small; each feature folder owns its Screen.tsx.
 import type { ComponentType } from 'preact';
 
-export type FeatureGroup = 'fiber' | 'loss' | 'link' | 'library';
+/** The situation the user is in: the home screen groups tools by it. */
+export type FeatureGroup = 'splice-tray' | 'patch-panel' | 'planning' | 'teaching' | 'library';
 
 export interface FeatureEntry {
   /** Route segment: the screen lives at #/<id>. */
@@ -15,24 +16,25 @@ export interface FeatureEntry {
 }
 
 export const GROUP_TITLES: Record<FeatureGroup, string> = {
-  fiber: 'The fiber itself',
-  loss: 'Joints, bends and launches',
-  link: 'The whole link',
-  library: 'Your fiber types',
+  'splice-tray': 'At the splice tray',
+  'patch-panel': 'At the patch panel and the trace',
+  planning: 'Planning a link',
+  teaching: 'Explaining to a class',
+  library: 'My fiber types',
 };
 
 export const FEATURES: FeatureEntry[] = [
-  { id: 'single-mode', group: 'fiber', title: 'Single-mode check', summary: 'Is this fiber single-mode at this wavelength? V-number and guided LP modes.', load: () => import('./singleMode/Screen') },
-  { id: 'mode-field', group: 'fiber', title: 'Mode field diameter', summary: 'MFD at any wavelength: Petermann II, Gaussian fit and Marcuse formula.', load: () => import('./modeField/Screen') },
-  { id: 'label-check', group: 'fiber', title: 'Check a label', summary: 'From cutoff and MFD on the label to a verdict at the system wavelength.', load: () => import('./labelCheck/Screen') },
-  { id: 'joint-loss', group: 'loss', title: 'Joint loss', summary: 'Splice or connector: MFD mismatch, offset, tilt and end gap.', load: () => import('./jointLoss/Screen') },
-  { id: 'otdr-splice', group: 'loss', title: 'OTDR splice reading', summary: 'Why one direction shows a gain, and the true splice loss.', load: () => import('./otdrSplice/Screen') },
-  { id: 'bend-loss', group: 'loss', title: 'Bend loss', summary: 'What a tight loop in a tray costs, per turn and for N turns.', load: () => import('./bendLoss/Screen') },
-  { id: 'launch', group: 'loss', title: 'Single-mode ⇄ multimode launch', summary: 'Power coupled into each mode, and the loss each way.', load: () => import('./launch/Screen') },
-  { id: 'link-budget', group: 'link', title: 'Link loss budget', summary: 'Fiber, connectors, splices and splitters against the equipment limits.', load: () => import('./linkBudget/Screen') },
-  { id: 'dispersion', group: 'link', title: 'Chromatic dispersion', summary: 'D(λ), zero-dispersion wavelength, and the reach for a bit rate.', load: () => import('./dispersion/Screen') },
-  { id: 'power', group: 'link', title: 'Optical power', summary: 'dBm ⇄ mW ⇄ µW and power after a chain of losses.', load: () => import('./power/Screen') },
-  { id: 'laser-safety', group: 'link', title: 'Laser safety', summary: 'Cautions and the indicative hazard context for a wavelength and power.', load: () => import('./safety/Screen') },
+  { id: 'single-mode', group: 'teaching', title: 'Single-mode check', summary: 'Is this fiber single-mode at this wavelength? V-number and guided LP modes.', load: () => import('./singleMode/Screen') },
+  { id: 'mode-field', group: 'teaching', title: 'Mode field diameter', summary: 'MFD at any wavelength: Petermann II, Gaussian fit and Marcuse formula.', load: () => import('./modeField/Screen') },
+  { id: 'label-check', group: 'splice-tray', title: 'Check a label', summary: 'From cutoff and MFD on the label to a verdict at the system wavelength.', load: () => import('./labelCheck/Screen') },
+  { id: 'joint-loss', group: 'splice-tray', title: 'Joint loss', summary: 'Splice or connector: MFD mismatch, offset, tilt and end gap.', load: () => import('./jointLoss/Screen') },
+  { id: 'otdr-splice', group: 'patch-panel', title: 'OTDR splice reading', summary: 'Why one direction shows a gain, and the true splice loss.', load: () => import('./otdrSplice/Screen') },
+  { id: 'bend-loss', group: 'splice-tray', title: 'Bend loss', summary: 'What a tight loop in a tray costs, per turn and for N turns.', load: () => import('./bendLoss/Screen') },
+  { id: 'launch', group: 'teaching', title: 'Single-mode ⇄ multimode launch', summary: 'Power coupled into each mode, and the loss each way.', load: () => import('./launch/Screen') },
+  { id: 'link-budget', group: 'planning', title: 'Link loss budget', summary: 'Fiber, connectors, splices and splitters against the equipment limits.', load: () => import('./linkBudget/Screen') },
+  { id: 'dispersion', group: 'planning', title: 'Chromatic dispersion', summary: 'D(λ), zero-dispersion wavelength, and the reach for a bit rate.', load: () => import('./dispersion/Screen') },
+  { id: 'power', group: 'patch-panel', title: 'Optical power', summary: 'dBm ⇄ mW ⇄ µW and power after a chain of losses.', load: () => import('./power/Screen') },
+  { id: 'laser-safety', group: 'patch-panel', title: 'Laser safety', summary: 'Cautions and the indicative hazard context for a wavelength and power.', load: () => import('./safety/Screen') },
   { id: 'library', group: 'library', title: 'Fiber types', summary: 'Save, edit, back up and restore the fiber types you meet.', load: () => import('./library/Screen') },
 ];
 
