@@ -18,3 +18,7 @@ export * from './bending';
 export * from './modeField';
 export * from './singleMode';
 export * from './equivalentStepIndex';
+export * from './encircledFlux';
+export * from './mandrel';
+export * from './offsetLaunch';
+export * from './ethernetReach';
