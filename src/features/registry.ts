@@ -40,6 +40,10 @@ export const FEATURES: FeatureEntry[] = [
   { id: 'dispersion', group: 'planning', title: 'Chromatic dispersion', summary: 'D(λ), zero-dispersion wavelength, and the reach for a bit rate.', load: () => import('./dispersion/Screen') },
   { id: 'power', group: 'patch-panel', title: 'Optical power', summary: 'dBm ⇄ mW ⇄ µW and power after a chain of losses.', load: () => import('./power/Screen') },
   { id: 'laser-safety', group: 'patch-panel', title: 'Laser safety', summary: 'Cautions and the indicative hazard context for a wavelength and power.', load: () => import('./safety/Screen') },
+  { id: 'encircled-flux', group: 'patch-panel', title: 'Launch against the EF template', summary: 'Encircled flux of a multimode launch from its modes: compliant, underfilled or overfilled.', keywords: 'encircled flux EF launch condition template multimode overfilled underfilled modal', load: () => import('./encircledFlux/Screen') },
+  { id: 'mode-filter-mandrel', group: 'patch-panel', title: 'Mode-filter mandrel', summary: 'Which mode groups N turns on a mandrel strip, the loss, and what a wrong mandrel does.', keywords: 'mandrel wrap mode filter multimode launch cord', load: () => import('./mandrel/Screen') },
+  { id: 'offset-launch', group: 'teaching', title: 'Offset launch into multimode', summary: 'Power per mode group as a single-mode spot moves off the axis; why cords avoid the centre.', keywords: 'offset launch mode conditioning cord patch 1000BASE-LX DMD', load: () => import('./offsetLaunch/Screen') },
+  { id: 'link-applications', group: 'planning', title: 'Which Ethernet a link carries', summary: 'Length and loss of a link against the IEEE 802.3 reach and channel loss of each interface.', keywords: 'ethernet 10GBASE-SR 1000BASE-SX 100GBASE application reach channel insertion loss IEEE 802.3', load: () => import('./linkApplications/Screen') },
   { id: 'library', group: 'library', title: 'Fiber types', summary: 'Save, edit, back up and restore the fiber types you meet.', load: () => import('./library/Screen') },
 ];
 
