@@ -35,7 +35,7 @@ export function efVerdictLine(check: EfCheck | undefined, curve: EncircledFluxCu
   const template = `${check.template.wavelengthNm} nm template`;
   switch (check.verdict) {
     case 'compliant':
-      return { label: `EF, ${template}`, value: 'all 4 radii', verdict: `Compliant, ${formatEf(check.marginEf)} inside the tightest limit`, tone: 'ok' };
+      return { label, value: formatEf(at.ef), verdict: `Compliant with the ${template} at all ${check.points.length} radii, ${formatEf(check.marginEf)} inside the tightest limit`, tone: 'ok' };
     case 'underfilled':
       return { label, value: formatEf(at.ef), verdict: `Underfilled: above ${formatEf(at.upper)}, reads loss low`, tone: 'bad' };
     case 'overfilled':
