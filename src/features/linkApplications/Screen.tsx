@@ -152,16 +152,14 @@ export default function Screen() {
       )}
       {rows && (
         <ResultCard title="Where each limit comes from">
-          <DataTable
-            caption="Source of each interface’s numbers"
-            rows={applicable}
-            rowKey={(a) => a.name}
-            columns={[
-              { label: 'Interface', cell: (a) => a.name },
-              { label: 'Clause and table', cell: (a) => a.clause },
-              { label: 'Checked or from memory', cell: (a) => `${a.source}${a.note ? `. ${a.note}` : ''}` },
-            ]}
-          />
+          <ul class="source-list">
+            {applicable.map((a) => (
+              <li key={a.name}>
+                <strong>{a.name}</strong>: {a.clause}. {a.source}
+                {a.note ? `. ${a.note}` : ''}.
+              </li>
+            ))}
+          </ul>
         </ResultCard>
       )}
     </CalcScreen>
