@@ -77,6 +77,7 @@ export function NumberInput({ id, label, unit, text, onText, error, conversion, 
         )}
         <input
           id={id}
+          data-number
           type="text"
           inputMode={keypad}
           enterKeyHint="done"
