@@ -220,7 +220,7 @@ export interface EfTemplate {
  * loss measurement of 50 µm links; the same template is in TIA-526-14-B). The four control radii 10, 15, 20 and
  * 22 µm and the limits below were written from memory: the text of the standard could not be found to check them.
  */
-export const EF_TEMPLATE_SOURCE = 'IEC 61280-4-1 Ed. 2.0 (2009), encircled-flux template for 50 µm fiber; control radii and limits from memory, not checked against the text';
+export const EF_TEMPLATE_SOURCE = 'IEC 61280-4-1 Ed. 2.0 (2009), encircled-flux template for 50 µm fiber; control radii and limits from memory, not checked against the text';
 
 export const EF_TEMPLATES: readonly EfTemplate[] = [
   {
@@ -250,8 +250,8 @@ export const EF_TEMPLATES: readonly EfTemplate[] = [
 ];
 
 /** How far a core or a wavelength may be from a template's own and still be judged by it. */
-const TEMPLATE_CORE_TOLERANCE_UM = 2.5; // 50 ± 2.5 µm: the core tolerance of category A1a fiber (IEC 60793-2-10), from memory
-const TEMPLATE_WAVELENGTH_TOLERANCE_NM = 30; // 850 and 1300 nm windows (as WINDOW_TOLERANCE_NM in linkBudget.ts)
+const TEMPLATE_CORE_TOLERANCE_UM = 2.5; // 50 ± 2.5 µm: the core tolerance of category A1a fiber (IEC 60793-2-10), from memory
+const TEMPLATE_WAVELENGTH_TOLERANCE_NM = 30; // 850 and 1300 nm windows (as WINDOW_TOLERANCE_NM in linkBudget.ts)
 
 /** The template that applies to this core and wavelength, or undefined (no template for 62.5 µm or 1550 nm here). */
 export function efTemplateFor(input: { coreDiameterUm: number; wavelengthNm: number }): EfTemplate | undefined {

@@ -33,7 +33,7 @@ export interface EthernetInterface {
 }
 
 const OFFSET_CORD = 'needs a mode-conditioning (offset-launch) cord at each transmitter on multimode fiber (IEEE 802.3 clause 38.11.4)';
-const OM3_ROW_NOTE = 'OM3, OM4 and OM5 meet the 500 MHz·km row; 802.3 lists no longer reach for them';
+const OM3_ROW_NOTE = 'OM3, OM4 and OM5 meet the 500 MHz·km row; 802.3 lists no longer reach for them';
 
 export const ETHERNET_INTERFACES: readonly EthernetInterface[] = [
   {
@@ -41,13 +41,13 @@ export const ETHERNET_INTERFACES: readonly EthernetInterface[] = [
     clause: 'IEEE 802.3 clause 38, Tables 38-2 (operating range) and 38-6 (link power budget)',
     window: 850,
     reaches: [
-      { category: 'OM1', maxReachM: 275, channelInsertionLossDb: 2.6, note: '62.5 µm, 200 MHz·km row (220 m and 2.38 dB on 160 MHz·km fiber)' },
+      { category: 'OM1', maxReachM: 275, channelInsertionLossDb: 2.6, note: '62.5 µm, 200 MHz·km row (220 m and 2.38 dB on 160 MHz·km fiber)' },
       { category: 'OM2', maxReachM: 550, channelInsertionLossDb: 3.56 },
       { category: 'OM3', maxReachM: 550, channelInsertionLossDb: 3.56, note: OM3_ROW_NOTE },
       { category: 'OM4', maxReachM: 550, channelInsertionLossDb: 3.56, note: OM3_ROW_NOTE },
       { category: 'OM5', maxReachM: 550, channelInsertionLossDb: 3.56, note: OM3_ROW_NOTE },
     ],
-    source: 'reaches 220/275/500/550 m checked against equipment guides quoting 802.3z; channel insertion losses from memory (a summary gives the 2.6 to 3.56 dB span)',
+    source: 'reaches 220/275/500/550 m checked against equipment guides quoting 802.3z; channel insertion losses from memory (a summary gives the 2.6 to 3.56 dB span)',
   },
   {
     name: '1000BASE-LX',
@@ -62,7 +62,7 @@ export const ETHERNET_INTERFACES: readonly EthernetInterface[] = [
       { category: 'OS1', maxReachM: 5000, channelInsertionLossDb: 4.57 },
       { category: 'OS2', maxReachM: 5000, channelInsertionLossDb: 4.57 },
     ],
-    source: 'reaches 550 m / 5 km checked against equipment guides quoting 802.3z; channel insertion losses from memory (a summary gives the 2.35 to 4.57 dB span)',
+    source: 'reaches 550 m / 5 km checked against equipment guides quoting 802.3z; channel insertion losses from memory (a summary gives the 2.35 to 4.57 dB span)',
     condition: OFFSET_CORD,
   },
   {
@@ -70,13 +70,13 @@ export const ETHERNET_INTERFACES: readonly EthernetInterface[] = [
     clause: 'IEEE 802.3 clause 52, Tables 52-6 (operating range) and 52-9 (link power budget)',
     window: 850,
     reaches: [
-      { category: 'OM1', maxReachM: 33, channelInsertionLossDb: 1.6, note: '62.5 µm, 200 MHz·km row (26 m on 160 MHz·km fiber)' },
+      { category: 'OM1', maxReachM: 33, channelInsertionLossDb: 1.6, note: '62.5 µm, 200 MHz·km row (26 m on 160 MHz·km fiber)' },
       { category: 'OM2', maxReachM: 82, channelInsertionLossDb: 1.8 },
       { category: 'OM3', maxReachM: 300, channelInsertionLossDb: 2.6 },
-      { category: 'OM4', maxReachM: 300, channelInsertionLossDb: 2.6, note: '2000 MHz·km row; 400 m on OM4 is often quoted but was not checked' },
-      { category: 'OM5', maxReachM: 300, channelInsertionLossDb: 2.6, note: '2000 MHz·km row' },
+      { category: 'OM4', maxReachM: 300, channelInsertionLossDb: 2.6, note: '2000 MHz·km row; 400 m on OM4 is often quoted but was not checked' },
+      { category: 'OM5', maxReachM: 300, channelInsertionLossDb: 2.6, note: '2000 MHz·km row' },
     ],
-    source: 'reaches 26 to 82 m and 300 m checked against a university network reference chart; channel insertion losses from memory',
+    source: 'reaches 26 to 82 m and 300 m checked against a university network reference chart; channel insertion losses from memory',
   },
   {
     name: '10GBASE-LRM',
@@ -89,7 +89,7 @@ export const ETHERNET_INTERFACES: readonly EthernetInterface[] = [
       { category: 'OM4', maxReachM: 220, channelInsertionLossDb: 1.9, note: 'as OM3' },
       { category: 'OM5', maxReachM: 220, channelInsertionLossDb: 1.9, note: 'as OM3' },
     ],
-    source: 'ranges and 1.9 dB checked against an equipment guide reproducing the 802.3aq table (OM1, OM2, OM3 rows); OM4 and OM5 taken as OM3',
+    source: 'ranges and 1.9 dB checked against an equipment guide reproducing the 802.3aq table (OM1, OM2, OM3 rows); OM4 and OM5 taken as OM3',
   },
   {
     name: '10GBASE-LR',
@@ -99,17 +99,17 @@ export const ETHERNET_INTERFACES: readonly EthernetInterface[] = [
       { category: 'OS1', maxReachM: 10_000, channelInsertionLossDb: 6.2 },
       { category: 'OS2', maxReachM: 10_000, channelInsertionLossDb: 6.2 },
     ],
-    source: '10 km checked against equipment data quoting 802.3ae; 6.2 dB from memory',
+    source: '10 km checked against equipment data quoting 802.3ae; 6.2 dB from memory',
   },
   {
     name: '10GBASE-ER',
     clause: 'IEEE 802.3 clause 52, Table 52-24 (channel insertion loss)',
     window: 1550,
     reaches: [
-      { category: 'OS1', maxReachM: 30_000, channelInsertionLossDb: 11, note: '40 km as an engineered link' },
-      { category: 'OS2', maxReachM: 30_000, channelInsertionLossDb: 11, note: '40 km as an engineered link' },
+      { category: 'OS1', maxReachM: 30_000, channelInsertionLossDb: 11, note: '40 km as an engineered link' },
+      { category: 'OS2', maxReachM: 30_000, channelInsertionLossDb: 11, note: '40 km as an engineered link' },
     ],
-    source: '11 dB from Table 52-24 checked against a message on the IEEE 802.3 reflector (2012); 30 km (40 km engineered) from memory',
+    source: '11 dB from Table 52-24 checked against a message on the IEEE 802.3 reflector (2012); 30 km (40 km engineered) from memory',
   },
   {
     name: '25GBASE-SR',
@@ -131,7 +131,7 @@ export const ETHERNET_INTERFACES: readonly EthernetInterface[] = [
       { category: 'OM4', maxReachM: 150, channelInsertionLossDb: 1.5, note: 'the lower loss allowance goes with the longer reach' },
       { category: 'OM5', maxReachM: 150, channelInsertionLossDb: 1.5 },
     ],
-    source: 'OM3 100 m checked against a university network reference chart; OM4 150 m and the losses from memory (the same chart says 125 m on OM4)',
+    source: 'OM3 100 m checked against a university network reference chart; OM4 150 m and the losses from memory (the same chart says 125 m on OM4)',
   },
   {
     name: '40GBASE-LR4',
@@ -141,7 +141,7 @@ export const ETHERNET_INTERFACES: readonly EthernetInterface[] = [
       { category: 'OS1', maxReachM: 10_000, channelInsertionLossDb: 6.7 },
       { category: 'OS2', maxReachM: 10_000, channelInsertionLossDb: 6.7 },
     ],
-    source: '10 km checked against a university network reference chart; 6.7 dB from memory',
+    source: '10 km checked against a university network reference chart; 6.7 dB from memory',
   },
   {
     name: '100GBASE-SR4',
@@ -162,7 +162,7 @@ export const ETHERNET_INTERFACES: readonly EthernetInterface[] = [
       { category: 'OS1', maxReachM: 10_000, channelInsertionLossDb: 6.3 },
       { category: 'OS2', maxReachM: 10_000, channelInsertionLossDb: 6.3 },
     ],
-    source: '10 km checked against a university network reference chart; 6.3 dB from memory',
+    source: '10 km checked against a university network reference chart; 6.3 dB from memory',
   },
 ];
 
@@ -214,7 +214,7 @@ export function applicationsForLink(input: { category: FiberCategory; lengthM: n
   const losses = new Map<LossWindow, number>();
   for (const [key, value] of Object.entries(given)) {
     const w = Number(key) as LossWindow;
-    if (!windows.includes(w)) throw new InputError('lossDbByWindow', key, `losses at ${windows.join(' or ')} nm for ${category} fiber`);
+    if (!windows.includes(w)) throw new InputError('lossDbByWindow', key, `losses at ${windows.join(' or ')} nm for ${category} fiber`);
     if (value === undefined) continue;
     losses.set(w, requireNumber(`lossDbByWindow[${key}]`, value, { min: MIN_LINK_LOSS_DB, max: MAX_LINK_LOSS_DB, unit: 'dB' }));
   }

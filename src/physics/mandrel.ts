@@ -139,12 +139,12 @@ export function mandrelFilter(input: MandrelInput): MandrelResult {
   const set = input.modes;
   if (set === null || typeof set !== 'object' || !Array.isArray(set.modes) || set.modes.length === 0 || typeof set.v !== 'number') throw new InputError('modes', set, 'a mode set from multimodeModes');
   const v = vNumber({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, wavelengthNm: lambda });
-  if (!(Math.abs(set.v - v) <= 1e-6 * v)) throw new InputError('modes', `V = ${set.v}`, `modes solved for this fiber at ${lambda} nm (V = ${v.toFixed(3)})`);
+  if (!(Math.abs(set.v - v) <= 1e-6 * v)) throw new InputError('modes', `V = ${set.v}`, `modes solved for this fiber at ${lambda} nm (V = ${v.toFixed(3)})`);
   for (const m of set.modes) {
     if (!m || !(m.b >= 0 && m.b <= 1) || !Number.isInteger(m.principal) || m.principal < 1 || !(m.degeneracy === 2 || m.degeneracy === 4)) throw new InputError('modes.modes', m, 'modes as multimodeModes returns them');
   }
   const mandrelMm = requireNumber('mandrelDiameterMm', input.mandrelDiameterMm, { min: MIN_MANDREL_DIAMETER_MM, max: MAX_MANDREL_DIAMETER_MM, unit: 'mm' });
-  const cordMm = requireNumber('cordDiameterMm', input.cordDiameterMm, { min: MIN_CORD_DIAMETER_MM, max: MAX_CORD_DIAMETER_MM, unit: 'mm', hint: (x) => (x >= 100 && x <= 10000 ? `did you mean ${x / 1000} mm (${x} µm)?` : undefined) });
+  const cordMm = requireNumber('cordDiameterMm', input.cordDiameterMm, { min: MIN_CORD_DIAMETER_MM, max: MAX_CORD_DIAMETER_MM, unit: 'mm', hint: (x) => (x >= 100 && x <= 10000 ? `did you mean ${x / 1000} mm (${x} µm)?` : undefined) });
   const turns = requireNumber('turns', input.turns, { min: 0, max: MAX_MANDREL_TURNS });
   const model = input.radiusModel ?? DEFAULT_BEND_RADIUS_MODEL;
   if (model !== 'stress-corrected' && model !== 'geometric') throw new InputError('radiusModel', model, "'stress-corrected' or 'geometric'");

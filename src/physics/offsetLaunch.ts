@@ -37,8 +37,8 @@ export const MAX_OFFSET_POINTS = 64;
  * notes (15 Dec 2004), which give "20 ± 3 µm" and "13 ± 3 µm" offset single-mode launches for OM1 and OM2.
  */
 export const MODE_CONDITIONING_OFFSETS: readonly { coreDiameterUm: number; minUm: number; maxUm: number; source: string }[] = [
-  { coreDiameterUm: 62.5, minUm: 17, maxUm: 23, source: 'IEEE 802.3 clause 38.11.4 (from memory; 20 ± 3 µm in the 802.3aq launch study notes)' },
-  { coreDiameterUm: 50, minUm: 10, maxUm: 16, source: 'IEEE 802.3 clause 38.11.4 (from memory; 13 ± 3 µm in the 802.3aq launch study notes)' },
+  { coreDiameterUm: 62.5, minUm: 17, maxUm: 23, source: 'IEEE 802.3 clause 38.11.4 (from memory; 20 ± 3 µm in the 802.3aq launch study notes)' },
+  { coreDiameterUm: 50, minUm: 10, maxUm: 16, source: 'IEEE 802.3 clause 38.11.4 (from memory; 13 ± 3 µm in the 802.3aq launch study notes)' },
 ];
 
 /** The cord offset range for this core size, or undefined. */

@@ -65,7 +65,7 @@ describe('launch conditions, answer first', () => {
     const page = await open('offset-launch');
     await expect.poll(() => headline(page), { timeout: 20_000 }).toMatch(/Centre-heavy/);
     await page.getByRole('button', { name: /Example: a mode-conditioning cord/ }).click();
-    await expect.poll(() => headline(page), { timeout: 20_000 }).toMatch(/Inside the cord range for this core \(10–16 µm\)/);
+    await expect.poll(() => headline(page), { timeout: 20_000 }).toMatch(/Inside the cord range for this core \(10–16\sµm\)/);
     await page.close();
   });
 

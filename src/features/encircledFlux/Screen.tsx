@@ -57,7 +57,7 @@ export default function Screen() {
 
   const launchWords = (): string => {
     if (kind === 'single-mode') return `single-mode spot, MFD ${shownValue(mfd, 'µm')}, ${shownValue(offset, 'µm')} off the axis`;
-    if (kind === 'mandrel') return `overfilled, then ${shownValue(turns, '')} turns of a ${formatNumber(cordMm, 3)} mm cord on a ${shownValue(mandrel, 'mm')} mandrel`;
+    if (kind === 'mandrel') return `overfilled, then ${shownValue(turns, '')} turns of a ${formatNumber(cordMm, 3)} mm cord on a ${shownValue(mandrel, 'mm')} mandrel`;
     if (kind === 'groups') return `typed per group: ${groupText.slice(0, 80)}`;
     return 'overfilled (equal power in every mode)';
   };
@@ -106,7 +106,7 @@ export default function Screen() {
             </div>
             {kind === 'single-mode' && (
               <>
-                <NumberField q={mfd} label="Mode field diameter of the single-mode fiber" unit="µm" quickPicks={[5.5, 9.2]} calc={res} help="About 5.5 µm for a fiber single-mode at 850 nm, 9.2 µm for a standard fiber at 1310 nm (common practice)." />
+                <NumberField q={mfd} label="Mode field diameter of the single-mode fiber" unit="µm" quickPicks={[5.5, 9.2]} calc={res} help="About 5.5 µm for a fiber single-mode at 850 nm, 9.2 µm for a standard fiber at 1310 nm (common practice)." />
                 <NumberField q={offset} label="Offset from the core centre" unit="µm" quickPicks={[0, 13, 20]} calc={res} />
               </>
             )}
@@ -165,7 +165,7 @@ export default function Screen() {
           'Guided modes only: leaky modes are gone after the first metres of a launch cord.',
           'The fiber’s profile is the ideal α-profile of the chosen type (no centre dip, no core-edge ripple).',
         ],
-        validity: 'Weakly guiding fibers; template verdicts only for 50 µm cores at 850 and 1300 nm.',
+        validity: 'Weakly guiding fibers; template verdicts only for 50 µm cores at 850 and 1300 nm.',
       }}
     >
       {r && (

@@ -28,11 +28,11 @@ export function efVerdictLine(check: EfCheck | undefined, curve: EncircledFluxCu
   if (!check) {
     const r = Math.round(0.8 * curve.coreRadiusUm);
     const ef = curve.ef[curve.rUm.findIndex((x) => x >= r)] ?? 1;
-    return { label: `EF at ${formatQuantity(r, 'µm')}`, value: formatEf(ef), verdict: 'No template here: the one in this app is for 50 µm fiber at 850 and 1300 nm', tone: 'info' };
+    return { label: `EF at ${formatQuantity(r, 'µm')}`, value: formatEf(ef), verdict: 'No template here: the one in this app is for 50 µm fiber at 850 and 1300 nm', tone: 'info' };
   }
   const at = check.points.find((p) => p.radiusUm === check.decidingRadiusUm) ?? check.points[check.points.length - 1];
   const label = `EF at ${formatQuantity(at.radiusUm, 'µm')}`;
-  const template = `${check.template.wavelengthNm} nm template`;
+  const template = `${check.template.wavelengthNm} nm template`;
   switch (check.verdict) {
     case 'compliant':
       return { label, value: formatEf(at.ef), verdict: `Compliant with the ${template} at all ${check.points.length} radii, ${formatEf(check.marginEf)} inside the tightest limit`, tone: 'ok' };
@@ -48,8 +48,8 @@ export function efVerdictLine(check: EfCheck | undefined, curve: EncircledFluxCu
 /** Plain words for a report line. */
 export function efVerdictText(check: EfCheck | undefined): string {
   if (!check) return 'no template for this core and wavelength';
-  if (check.verdict === 'compliant') return `compliant with the ${check.template.wavelengthNm} nm template`;
-  return `${check.verdict} at ${formatQuantity(check.decidingRadiusUm, 'µm')} (${check.template.wavelengthNm} nm template)`;
+  if (check.verdict === 'compliant') return `compliant with the ${check.template.wavelengthNm} nm template`;
+  return `${check.verdict} at ${formatQuantity(check.decidingRadiusUm, 'µm')} (${check.template.wavelengthNm} nm template)`;
 }
 
 export interface CurveToShow {
@@ -95,7 +95,7 @@ export function GroupBars({ groups, title = 'Power in each mode group' }: { grou
 export function ControlTable({ check }: { check: EfCheck }) {
   return (
     <DataTable
-      caption={`Control radii of the ${check.template.wavelengthNm} nm template for 50 µm fiber`}
+      caption={`Control radii of the ${check.template.wavelengthNm} nm template for 50 µm fiber`}
       rows={check.points}
       rowKey={(p) => p.radiusUm}
       rowClass={(p) => (p.status === 'within' ? undefined : 'row-bad')}

@@ -58,10 +58,10 @@ export default function Screen() {
       return applicationsForLink({ category, lengthM: lengthKm * M_PER_KM, lossDbByWindow });
     } catch (e) {
       // Say a refused value in the words and unit of the field it came from.
-      if (e instanceof InputError && e.argument === 'lengthM') throw new InputError(length.argument, lengthKm, `a number from 0 to ${MAX_APPLICATION_LINK_M / M_PER_KM} km`);
+      if (e instanceof InputError && e.argument === 'lengthM') throw new InputError(length.argument, lengthKm, `a number from 0 to ${MAX_APPLICATION_LINK_M / M_PER_KM} km`);
       if (e instanceof InputError && e.argument.startsWith('lossDbByWindow[')) {
         const q = e.argument.includes(String(windows[0])) ? loss1 : loss2;
-        throw new InputError(q.argument, e.value, `a number from ${MIN_LINK_LOSS_DB} to ${MAX_LINK_LOSS_DB} dB`);
+        throw new InputError(q.argument, e.value, `a number from ${MIN_LINK_LOSS_DB} to ${MAX_LINK_LOSS_DB} dB`);
       }
       throw e;
     }
@@ -85,7 +85,7 @@ export default function Screen() {
     inputs: [
       ['Fiber category', category],
       ['Length', shownValue(length, 'km')],
-      ...(withLoss ? windows.map((w, i): [string, string] => [`Loss at ${w} nm`, (i === 0 ? loss1 : loss2).text.trim() === '' ? 'not given' : withUnit((i === 0 ? loss1 : loss2).text.trim(), 'dB')]) : [['Loss', 'not given (length only)'] as [string, string]]),
+      ...(withLoss ? windows.map((w, i): [string, string] => [`Loss at ${w} nm`, (i === 0 ? loss1 : loss2).text.trim() === '' ? 'not given' : withUnit((i === 0 ? loss1 : loss2).text.trim(), 'dB')]) : [['Loss', 'not given (length only)'] as [string, string]]),
     ],
     outputs: applicable.map((a): [string, string] => [a.name, `${VERDICT_MARK[a.verdict].slice(2)}; reach ${metres(a.maxReachM)}, channel insertion loss ${formatDb(a.channelInsertionLossDb, 2)}; ${margin(a)}${a.condition ? `; ${a.condition}` : ''}`]),
     assumptions: ['Limits from IEEE 802.3 per interface and fiber category; which were checked and which are from memory is listed per interface on the screen.', 'A link within both limits is carried by any compliant pair of transceivers.'],
@@ -109,7 +109,7 @@ export default function Screen() {
               ))}
             </select>
           </div>
-          <NumberField q={length} label="Link length" unit="km" quickPicks={[0.1, 0.3, 0.55, 10]} calc={state} help="Type 300 m or 0.3 km." />
+          <NumberField q={length} label="Link length" unit="km" quickPicks={[0.1, 0.3, 0.55, 10]} calc={state} help="Type 300 m or 0.3 km." />
           <div class="field">
             <label for="apps-loss">What you know about the loss</label>
             <select id="apps-loss" value={withLoss ? 'yes' : 'no'} onChange={(e) => setWithLoss((e.currentTarget as HTMLSelectElement).value === 'yes')}>
@@ -119,8 +119,8 @@ export default function Screen() {
           </div>
           {withLoss && (
             <>
-              <NumberField q={{ ...loss1, error: lossFieldError(loss1), failure: withLoss && loss1.text.trim() !== '' ? loss1.failure : undefined }} label={`Loss at ${windows[0]} nm`} unit="dB" signed example="such as 1.8 (leave empty if not measured)" calc={state} />
-              <NumberField q={{ ...loss2, error: lossFieldError(loss2), failure: withLoss && loss2.text.trim() !== '' ? loss2.failure : undefined }} label={`Loss at ${windows[1]} nm`} unit="dB" signed example="such as 1.2 (leave empty if not measured)" calc={state} />
+              <NumberField q={{ ...loss1, error: lossFieldError(loss1), failure: withLoss && loss1.text.trim() !== '' ? loss1.failure : undefined }} label={`Loss at ${windows[0]} nm`} unit="dB" signed example="such as 1.8 (leave empty if not measured)" calc={state} />
+              <NumberField q={{ ...loss2, error: lossFieldError(loss2), failure: withLoss && loss2.text.trim() !== '' ? loss2.failure : undefined }} label={`Loss at ${windows[1]} nm`} unit="dB" signed example="such as 1.2 (leave empty if not measured)" calc={state} />
             </>
           )}
         </div>
@@ -128,7 +128,7 @@ export default function Screen() {
       how={{
         formula: 'Carried when the length is within the interface’s operating range on this fiber category and the loss at its window is within its channel insertion loss. Margin = limit − link value.',
         source: 'IEEE 802.3 clauses 38, 52, 68, 86, 87, 88, 95, 112 (per-interface source and what was checked listed below)',
-        assumptions: ['The loss is the end-to-end insertion loss at the interface’s window (the 1300 nm reading stands for 1310 nm interfaces on multimode fiber).', 'No other impairment than the standard’s own link model allows for (the channel insertion loss already includes the fiber and connections of the standard’s link).'],
+        assumptions: ['The loss is the end-to-end insertion loss at the interface’s window (the 1300 nm reading stands for 1310 nm interfaces on multimode fiber).', 'No other impairment than the standard’s own link model allows for (the channel insertion loss already includes the fiber and connections of the standard’s link).'],
         validity: 'The interfaces listed; engineered links beyond the standard’s reach are not judged.',
       }}
     >

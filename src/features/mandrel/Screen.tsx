@@ -126,7 +126,7 @@ export default function Screen() {
             formatValue={(v) => formatNumber(v, 2)}
           />
           <dl class="kv">
-            <dt>Stripped (under 10 % left)</dt>
+            <dt>Stripped (under 10 % left)</dt>
             <dd>{stripped}</dd>
             <dt>Partly stripped</dt>
             <dd>{groupRange(r.perGroup, 'partly')}</dd>
@@ -143,7 +143,7 @@ export default function Screen() {
             curves={[
               { name: 'After this wrap', curve: r.chosen.curve },
               { name: 'No wrap (overfilled)', curve: r.unwrapped.curve, dashed: true },
-              ...(table && !sameAsTable ? [{ name: `The table’s ${formatNumber(table.mandrelDiameterMm, 3)} mm mandrel`, curve: table.curve }] : []),
+              ...(table && !sameAsTable ? [{ name: `The table’s ${formatNumber(table.mandrelDiameterMm, 3)} mm mandrel`, curve: table.curve }] : []),
             ]}
             check={r.chosen.check}
           />
@@ -169,7 +169,7 @@ export default function Screen() {
             </p>
           )}
           {!table && <p class="note">The table has no mandrel for this core and cord.</p>}
-          <ShortProse text="The loss falls in steps as the mandrel grows: each step is one more mode group that survives the bend. A mandrel smaller than the one specified strips groups the launch should keep, so the light reaching the link is concentrated near the axis and every link reads lower loss than it should. A larger one, or the mandrel for a 62.5 µm core used on a 50 µm cord, leaves high groups that the first connector strips, so links read higher loss. Either way two testers stop agreeing. The model treats each mode as a ray in the bend plane; treat its step positions as a teaching picture, and the template, checked with a meter, as the arbiter." />
+          <ShortProse text="The loss falls in steps as the mandrel grows: each step is one more mode group that survives the bend. A mandrel smaller than the one specified strips groups the launch should keep, so the light reaching the link is concentrated near the axis and every link reads lower loss than it should. A larger one, or the mandrel for a 62.5 µm core used on a 50 µm cord, leaves high groups that the first connector strips, so links read higher loss. Either way two testers stop agreeing. The model treats each mode as a ray in the bend plane; treat its step positions as a teaching picture, and the template, checked with a meter, as the arbiter." />
         </ResultCard>
       )}
       <ResultCard title="Mandrels in common use">

@@ -40,7 +40,7 @@ export default function Screen() {
     const low = shareUpTo(r.at.perGroup, LOW_GROUPS);
     const d = r.at.offsetUm;
     if (cord && d >= cord.minUm && d <= cord.maxUm) {
-      verdict = `Inside the cord range for this core (${cord.minUm}–${cord.maxUm} µm): ${formatPercent(low, 0)} in groups 1–2`;
+      verdict = `Inside the cord range for this core (${cord.minUm}–${cord.maxUm} µm): ${formatPercent(low, 0)} in groups 1–2`;
       tone = 'ok';
     } else if (cord && d < cord.minUm) {
       verdict = `Centre-heavy: ${formatPercent(low, 0)} in groups 1–2, the groups a centre defect delays`;
@@ -68,11 +68,11 @@ export default function Screen() {
       ['Offset from the core centre', shownValue(offset, 'µm')],
     ],
     outputs: [
-      [`Power within ${CENTRE_RADIUS_UM} µm of the axis`, formatPercent(r.at.centreShare, 1)],
+      [`Power within ${CENTRE_RADIUS_UM} µm of the axis`, formatPercent(r.at.centreShare, 1)],
       ['Power in groups 1–2', formatPercent(shareUpTo(r.at.perGroup, LOW_GROUPS), 1)],
       ['Launch loss', formatDb(r.at.lossDb, 2)],
       ['Encircled flux', efVerdictText(r.at.check)],
-      ...(cord ? [['Offset of mode-conditioning cords', `${cord.minUm} to ${cord.maxUm} µm (${cord.source})`] as [string, string]] : []),
+      ...(cord ? [['Offset of mode-conditioning cords', `${cord.minUm} to ${cord.maxUm} µm (${cord.source})`] as [string, string]] : []),
     ],
     assumptions: ['Gaussian single-mode spot; overlap with every guided mode; modes add in power downstream.', `Template: ${templateSource(r.at.check)}.`],
   };
@@ -88,13 +88,13 @@ export default function Screen() {
           {pick.element}
           <div class="form">
             <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={[850, 1300, 1310]} calc={res} />
-            <NumberField q={mfd} label="Mode field diameter of the single-mode fiber" unit="µm" quickPicks={[5.5, 9.2]} calc={res} help="9.2 µm for a standard single-mode fiber at 1310 nm (common practice)." />
+            <NumberField q={mfd} label="Mode field diameter of the single-mode fiber" unit="µm" quickPicks={[5.5, 9.2]} calc={res} help="9.2 µm for a standard single-mode fiber at 1310 nm (common practice)." />
             <NumberField q={offset} label="Offset from the core centre" unit="µm" quickPicks={[0, 13, 20]} calc={res} />
           </div>
           {cord && (
             <p>
               <button type="button" onClick={() => offset.setText(String((cord.minUm + cord.maxUm) / 2))}>
-                Example: a mode-conditioning cord for this core ({cord.minUm}–{cord.maxUm} µm)
+                Example: a mode-conditioning cord for this core ({cord.minUm}–{cord.maxUm} µm)
               </button>
             </p>
           )}
@@ -115,7 +115,7 @@ export default function Screen() {
             yLabel="Share of the guided power (%)"
             series={[
               { name: 'In groups 1–2', points: r.sweep.map((p) => [p.offsetUm, 100 * shareUpTo(p.perGroup, LOW_GROUPS)]) },
-              { name: `Within ${CENTRE_RADIUS_UM} µm of the axis`, points: r.sweep.map((p) => [p.offsetUm, 100 * p.centreShare]), dashed: true },
+              { name: `Within ${CENTRE_RADIUS_UM} µm of the axis`, points: r.sweep.map((p) => [p.offsetUm, 100 * p.centreShare]), dashed: true },
               { name: 'Guided at all', points: r.sweep.map((p) => [p.offsetUm, 100 * p.coupledFraction]) },
             ]}
             markers={[
@@ -138,7 +138,7 @@ export default function Screen() {
           <dl class="kv">
             <dt>Launch loss</dt>
             <dd class="num">{formatDb(r.at.lossDb, 2)}</dd>
-            <dt>Highest group carrying 1 % or more</dt>
+            <dt>Highest group carrying 1 % or more</dt>
             <dd class="num">{formatNumber(Math.max(0, ...r.at.perGroup.filter((g) => g.fraction >= 0.01).map((g) => g.principal)), 3)} of {r.highestGroup}</dd>
           </dl>
           <EfPlot curves={[{ name: 'This launch', curve: r.at.curve }]} check={r.at.check} />
