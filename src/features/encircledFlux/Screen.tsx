@@ -176,7 +176,7 @@ export default function Screen() {
         </ResultCard>
       )}
       {r && (
-        <ResultCard title="Power in each mode group" stale={res.stale}>
+        <ResultCard title="Mode groups" stale={res.stale}>
           <GroupBars groups={r.curve.perGroup} />
           <dl class="kv">
             <dt>Guided modes</dt>

@@ -14,8 +14,8 @@ export function fiberSpec(f: ResolvedFiber): MultimodeFiberSpec {
 
 const STATUS_WORDS: Record<EfPointStatus, string> = {
   within: 'within',
-  'too-little-inside': 'too little inside (overfilled)',
-  'too-much-inside': 'too much inside (underfilled)',
+  'too-little-inside': 'overfilled',
+  'too-much-inside': 'underfilled',
 };
 
 /** EF value with three decimals: the template's limits are given to four, the bands are ~0.01 wide. */

@@ -27,11 +27,11 @@ function margin(a: ApplicationCheck): string {
 
 const VERDICT_MARK: Record<ApplicationCheck['verdict'], string> = {
   carried: '✓ carried',
-  'length fits, loss not given': '✓ length fits (loss not checked)',
+  'length fits, loss not given': '✓ length fits',
   'too long': '✗ too long',
-  'too much loss': '✗ too much loss',
-  'too long and too much loss': '✗ too long and too much loss',
-  'not on this fiber': '— not for this fiber',
+  'too much loss': '✗ loss over',
+  'too long and too much loss': '✗ both over',
+  'not on this fiber': '— other fiber',
 };
 
 export default function Screen() {
@@ -87,7 +87,7 @@ export default function Screen() {
       ['Length', shownValue(length, 'km')],
       ...(withLoss ? windows.map((w, i): [string, string] => [`Loss at ${w} nm`, (i === 0 ? loss1 : loss2).text.trim() === '' ? 'not given' : withUnit((i === 0 ? loss1 : loss2).text.trim(), 'dB')]) : [['Loss', 'not given (length only)'] as [string, string]]),
     ],
-    outputs: applicable.map((a): [string, string] => [a.name, `${VERDICT_MARK[a.verdict].slice(2)}; reach ${metres(a.maxReachM)}, channel insertion loss ${formatDb(a.channelInsertionLossDb, 2)}; ${margin(a)}${a.condition ? `; ${a.condition}` : ''}`]),
+    outputs: applicable.map((a): [string, string] => [a.name, `${a.verdict}; reach ${metres(a.maxReachM)}, channel insertion loss ${formatDb(a.channelInsertionLossDb, 2)}; ${margin(a)}${a.condition ? `; ${a.condition}` : ''}`]),
     assumptions: ['Limits from IEEE 802.3 per interface and fiber category; which were checked and which are from memory is listed per interface on the screen.', 'A link within both limits is carried by any compliant pair of transceivers.'],
   };
 
@@ -144,7 +144,8 @@ export default function Screen() {
               { label: 'Verdict', cell: (a) => VERDICT_MARK[a.verdict] },
               { label: 'Reach', cell: (a) => metres(a.maxReachM), num: true },
               { label: 'Channel loss', cell: (a) => formatDb(a.channelInsertionLossDb, 2), num: true },
-              { label: 'Margin', cell: (a) => margin(a) },
+              { label: 'Reach to spare', cell: (a) => metres(a.reachMarginM), num: true },
+              { label: 'Loss to spare', cell: (a) => (a.lossMarginDb === undefined ? 'not checked' : formatDb(a.lossMarginDb, 2)), num: true },
             ]}
           />
           {applicable.some((a) => a.condition) && <ShortProse text={`1000BASE-LX on multimode fiber: ${applicable.find((a) => a.condition)!.condition}. The offset-launch screen shows why.`} />}

@@ -112,10 +112,10 @@ export default function Screen() {
           <LinePlot
             title="Where the power goes as the spot moves out"
             xLabel="Offset from the core centre (µm)"
-            yLabel="Share of the guided power (%)"
+            yLabel="Share of the power (%)"
             series={[
               { name: 'In groups 1–2', points: r.sweep.map((p) => [p.offsetUm, 100 * shareUpTo(p.perGroup, LOW_GROUPS)]) },
-              { name: `Within ${CENTRE_RADIUS_UM} µm of the axis`, points: r.sweep.map((p) => [p.offsetUm, 100 * p.centreShare]), dashed: true },
+              { name: `Near the axis (inside ${CENTRE_RADIUS_UM} µm)`, points: r.sweep.map((p) => [p.offsetUm, 100 * p.centreShare]), dashed: true },
               { name: 'Guided at all', points: r.sweep.map((p) => [p.offsetUm, 100 * p.coupledFraction]) },
             ]}
             markers={[
