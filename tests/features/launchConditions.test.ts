@@ -35,7 +35,7 @@ describe('the worker tasks behind the screens', () => {
   it('an overfilled launch into OM3 at 850 nm: headline "Overfilled" at an outer radius', () => {
     const r = efTask({ fiber: OM3, wavelengthNm: 850, launch: { kind: 'overfilled' } });
     const line = efVerdictLine(r.check, r.curve);
-    expect(line.verdict).toMatch(/^Overfilled: below 0\.\d{3}, reads loss high$/);
+    expect(line.verdict).toMatch(/^Overfilled: below 0\.\d{4}, reads loss high$/);
     expect(line.label).toMatch(/EF at (15|20|22)\u00a0µm/);
     expect(line.tone).toBe('bad');
   });

@@ -13,7 +13,7 @@ import { useFiberPicker } from '../../ui/FiberPicker';
 import { MANDREL_TABLE, MANDREL_TABLE_SOURCE } from '../../physics';
 import type { EfInput, EfOutput, LaunchSpec } from './tasks';
 import { parseGroupPowers } from './groupText';
-import { ControlTable, EfPlot, efVerdictLine, efVerdictText, fiberSpec, formatEf, GroupBars, shareUpTo, templateSource } from './parts';
+import { ControlTable, EfPlot, efVerdictLine, efVerdictText, fiberSpec, formatEf, formatLimit, GroupBars, shareUpTo, templateSource } from './parts';
 
 type LaunchKind = LaunchSpec['kind'];
 
@@ -71,7 +71,7 @@ export default function Screen() {
     ],
     outputs: [
       ['Verdict', efVerdictText(r.check)],
-      ...(r.check?.points.map((p): [string, string] => [`EF at ${formatQuantity(p.radiusUm, 'µm')}`, `${formatEf(p.ef)} (allowed ${formatEf(p.lower)} to ${formatEf(p.upper)})`]) ?? []),
+      ...(r.check?.points.map((p): [string, string] => [`EF at ${formatQuantity(p.radiusUm, 'µm')}`, `${formatEf(p.ef)} (allowed ${formatLimit(p.lower)} to ${formatLimit(p.upper)})`]) ?? []),
       ['Power in groups 1–3', formatPercent(shareUpTo(r.curve.perGroup, 3), 1)],
       ['Guided modes', `${r.modeCount} in ${r.highestGroup} groups (V = ${formatNumber(r.v, 3)})`],
       ...(kind === 'single-mode' || kind === 'mandrel' ? [['Loss of the launch', formatDb(r.lossDb, 2)] as [string, string]] : []),

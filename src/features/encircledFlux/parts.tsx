@@ -23,6 +23,11 @@ export function formatEf(v: number | undefined): string {
   return formatFixed(v, 3);
 }
 
+/** A template limit as the template prints it: four decimals. */
+export function formatLimit(v: number | undefined): string {
+  return formatFixed(v, 4);
+}
+
 /** The verdict against the template as one headline line. */
 export function efVerdictLine(check: EfCheck | undefined, curve: EncircledFluxCurve): HeadlineLine {
   if (!check) {
@@ -37,9 +42,9 @@ export function efVerdictLine(check: EfCheck | undefined, curve: EncircledFluxCu
     case 'compliant':
       return { label, value: formatEf(at.ef), verdict: `Compliant with the ${template} at all ${check.points.length} radii, ${formatEf(check.marginEf)} inside the tightest limit`, tone: 'ok' };
     case 'underfilled':
-      return { label, value: formatEf(at.ef), verdict: `Underfilled: above ${formatEf(at.upper)}, reads loss low`, tone: 'bad' };
+      return { label, value: formatEf(at.ef), verdict: `Underfilled: above ${formatLimit(at.upper)}, reads loss low`, tone: 'bad' };
     case 'overfilled':
-      return { label, value: formatEf(at.ef), verdict: `Overfilled: below ${formatEf(at.lower)}, reads loss high`, tone: 'bad' };
+      return { label, value: formatEf(at.ef), verdict: `Overfilled: below ${formatLimit(at.lower)}, reads loss high`, tone: 'bad' };
     default:
       return { label, value: formatEf(at.ef), verdict: 'Outside the template both ways (too much at one radius, too little at another)', tone: 'bad' };
   }
@@ -102,7 +107,7 @@ export function ControlTable({ check }: { check: EfCheck }) {
       columns={[
         { label: 'Radius', cell: (p) => formatQuantity(p.radiusUm, 'µm'), num: true },
         { label: 'EF', cell: (p) => formatEf(p.ef), num: true },
-        { label: 'Allowed', cell: (p) => `${formatEf(p.lower)} to ${formatEf(p.upper)}`, num: true },
+        { label: 'Allowed', cell: (p) => `${formatLimit(p.lower)} to ${formatLimit(p.upper)}`, num: true },
         { label: 'Reading', cell: (p) => STATUS_WORDS[p.status] },
       ]}
     />
