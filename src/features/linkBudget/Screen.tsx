@@ -226,7 +226,7 @@ export default function Screen() {
       : `A measured loss above the highest fails acceptance (${b.result.ruleSet.name}).`,
   };
 
-  const report: ReportSpec | undefined = b && {
+  const reportWithNbsp: ReportSpec | undefined = b && {
     title: 'Link loss budget',
     inputs: [
       ['Fiber type', fiber?.name ?? '—'],
@@ -236,7 +236,7 @@ export default function Screen() {
       ['Mated connector pairs', shownValue(connectors, '')],
       ['Splices', shownValue(splices, '')],
       ['Splitter outputs', shownValue(splitWays, '')],
-      ['Patch cords', `${shownValue(cords, '')} × ${shownValue(cordLength, 'km')}`],
+      ['Patch cords', `${shownValue(cords, '')} × ${cordLength.text.trim()}`],
       ['Other losses', shownValue(otherLoss, 'dB')],
       ['Design margin', shownValue(margin, 'dB')],
       ['Wavelengths the equipment uses', chosenNm.map((w) => `${w} nm`).join(', ')],
@@ -256,6 +256,15 @@ export default function Screen() {
       ...(b.limits ? ['The same equipment values apply at each wavelength ticked; spare = power budget − highest loss − design margin.'] : []),
       ...(b.limits?.kind === 'budget' ? ['With a power budget alone the receiver overload cannot be checked; enter the levels for that.'] : []),
     ],
+  };
+
+  // Plain text pastes anywhere: ordinary spaces in the copied report.
+  const plain = (t: string) => t.replace(/\u00a0/g, ' ');
+  const report: ReportSpec | undefined = reportWithNbsp && {
+    ...reportWithNbsp,
+    inputs: reportWithNbsp.inputs.map(([k, v]) => [k, plain(v)]),
+    outputs: reportWithNbsp.outputs.map(([k, v]) => [k, plain(v)]),
+    assumptions: reportWithNbsp.assumptions?.map(plain),
   };
 
   const toggleWavelength = (w: number, on: boolean) => setPicked({ ...picked, [w]: on });
@@ -384,15 +393,13 @@ export default function Screen() {
       {b && (
         <ResultCard title="Loss at each wavelength" stale={budget.stale}>
           <div class="lb-details">
-            <dl class="kv print-only">
-              <dt>Fiber</dt>
-              <dd>{fiber?.name}</dd>
-              <dt>The link</dt>
-              <dd>{report?.inputs.slice(3, 10).map(([k, v]) => `${k}: ${v}`).join('; ')}</dd>
-            </dl>
-            {b.answers.map((a) => (
-              <WavelengthDetails key={a.budget.wavelengthNm} a={a} />
-            ))}
+            <p class="print-only">
+              {fiber?.name}; {report?.inputs.slice(1, 10).map(([k, v]) => `${k.toLowerCase()} ${v}`).join('; ')}.
+            </p>
+            <WavelengthTable answers={b.answers} />
+            <ElementTable answers={b.answers} />
+            {b.answers.map((a) => a.allowanceNote && <p class="note" key={a.budget.wavelengthNm}>{a.allowanceNote}</p>)}
+            <p class="note">The highest loss is the acceptance value: a measured loss above it fails.</p>
             <ul class="note">
               {b.result.notes.map((n) => (
                 <li key={n}>{n}</li>
@@ -414,62 +421,54 @@ export default function Screen() {
   );
 }
 
-type Row = ElementLoss | { index: -1; label: string; minDb: number; typicalDb: number; maxDb: number; basis?: undefined };
-
-function WavelengthDetails({ a }: { a: WavelengthAnswer }) {
-  const w = a.budget;
-  const at = withUnit(String(w.wavelengthNm), 'nm');
-  const rows: Row[] = [...w.elements, { index: -1, label: 'Total', minDb: w.minDb, typicalDb: w.typicalDb, maxDb: w.maxDb }];
-  const f = a.fit;
+/** One row per wavelength: the loss spread, the margin kept, and what the equipment leaves. */
+function WavelengthTable({ answers }: { answers: WavelengthAnswer[] }) {
+  const withFit = answers.some((a) => a.fit);
+  const withLevels = answers.some((a) => a.fit?.weakestRxDbm !== undefined);
   return (
-    <section class="results">
-      <h3>At {at}</h3>
-      <DataTable
-        caption={`Loss of each element at ${w.wavelengthNm} nm`}
-        rows={rows}
-        rowKey={(r) => r.index}
-        rowClass={(r) => (r.index === -1 ? 'total-row' : undefined)}
-        columns={[
-          { label: 'Element', cell: (r) => (r.basis ? <span title={r.basis}>{r.label}</span> : <strong>{r.label}</strong>) },
-          { label: 'Lowest', cell: (r) => formatDb(r.minDb), num: true },
-          { label: 'Typical', cell: (r) => formatDb(r.typicalDb), num: true },
-          { label: 'Highest', cell: (r) => formatDb(r.maxDb), num: true },
-        ]}
-      />
-      <dl class="kv">
-        <dt>Acceptance value</dt>
-        <dd>
-          <span class="num">{formatDb(w.acceptanceDb)}</span> (a measured loss above this fails)
-        </dd>
-        <dt>Highest loss with the design margin</dt>
-        <dd class="num">{formatDb(w.withMarginDb)}</dd>
-        {w.costliest && (
-          <>
-            <dt>Costs most</dt>
-            <dd>
-              {w.costliest.label}, <span class="num">{formatDb(w.costliest.maxDb)}</span> at most
-            </dd>
-          </>
-        )}
-        {f && (
-          <>
-            <dt>Equipment power budget</dt>
-            <dd class="num">{formatDb(f.powerBudgetDb)}</dd>
-            <dt>Left after loss and margin</dt>
-            <dd class="num">{formatDb(f.spareDb)}</dd>
-          </>
-        )}
-        {f?.weakestRxDbm !== undefined && f.strongestRxDbm !== undefined && (
-          <>
-            <dt>Signal at the receiver</dt>
-            <dd>
-              Weakest <span class="num">{withUnit(formatFixed(f.weakestRxDbm, 2), 'dBm')}</span>, strongest{' '}
-              <span class="num">{withUnit(formatFixed(f.strongestRxDbm, 2), 'dBm')}</span>
-            </dd>
-          </>
-        )}
-      </dl>
-      {a.allowanceNote && <p class="note">{a.allowanceNote}</p>}
-    </section>
+    <DataTable
+      caption="The link at each wavelength"
+      rows={answers}
+      rowKey={(a) => a.budget.wavelengthNm}
+      rowClass={(a) => (a.fit && a.fit.verdict !== 'fits' ? 'row-flag' : undefined)}
+      columns={[
+        { label: 'Wavelength', cell: (a) => withUnit(String(a.budget.wavelengthNm), 'nm'), num: true },
+        { label: 'Lowest loss', cell: (a) => formatDb(a.budget.minDb), num: true },
+        { label: 'Typical loss', cell: (a) => formatDb(a.budget.typicalDb), num: true },
+        { label: 'Highest loss', cell: (a) => formatDb(a.budget.maxDb), num: true },
+        { label: 'Highest with margin', cell: (a) => formatDb(a.budget.withMarginDb), num: true },
+        ...(withFit ? [{ label: 'Left over', cell: (a: WavelengthAnswer) => formatDb(a.fit?.spareDb), num: true }] : []),
+        ...(withLevels
+          ? [
+              { label: 'Weakest at receiver', cell: (a: WavelengthAnswer) => withUnit(formatFixed(a.fit?.weakestRxDbm, 2), 'dBm'), num: true },
+              { label: 'Strongest at receiver', cell: (a: WavelengthAnswer) => withUnit(formatFixed(a.fit?.strongestRxDbm, 2), 'dBm'), num: true },
+            ]
+          : []),
+      ]}
+    />
+  );
+}
+
+/** One row per element: its highest loss at each wavelength (how it was reached in the row's tooltip). */
+function ElementTable({ answers }: { answers: WavelengthAnswer[] }) {
+  const first = answers[0];
+  if (!first) return null;
+  const rows: { index: number; label: string; basis?: string }[] = [...first.budget.elements, { index: -1, label: 'Total' }];
+  const at = (a: WavelengthAnswer, i: number): ElementLoss | undefined => a.budget.elements[i];
+  return (
+    <DataTable
+      caption="Highest loss of each element"
+      rows={rows}
+      rowKey={(r) => r.index}
+      rowClass={(r) => (r.index === -1 ? 'total-row' : undefined)}
+      columns={[
+        { label: 'Element', cell: (r) => (r.basis ? <span title={r.basis}>{r.label}</span> : <strong>{r.label}</strong>) },
+        ...answers.map((a) => ({
+          label: `At ${a.budget.wavelengthNm}\u00a0nm`,
+          cell: (r: { index: number }) => formatDb(r.index === -1 ? a.budget.maxDb : at(a, r.index)?.maxDb),
+          num: true,
+        })),
+      ]}
+    />
   );
 }

@@ -41,7 +41,7 @@ export default function Screen() {
     note: `${BAND_WORDS[c.band]}. Context only: your site’s rules and local codes govern.`,
   };
 
-  const report: ReportSpec | undefined = c && {
+  const reportWithNbsp: ReportSpec | undefined = c && {
     title: 'Laser hazard context',
     inputs: [
       ['Wavelength', withUnit(String(c.wavelengthNm), 'nm')],
@@ -53,6 +53,15 @@ export default function Screen() {
       ...(c.indicativeLevel ? [['Source', c.indicativeLevel.source] as [string, string]] : []),
     ],
     assumptions: [...USUAL_LASER_CAUTIONS, ...addedCautions(c), GOVERNING_STATEMENT],
+  };
+
+  // Plain text pastes anywhere: ordinary spaces in the copied report.
+  const plain = (t: string) => t.replace(/\u00a0/g, ' ');
+  const report: ReportSpec | undefined = reportWithNbsp && {
+    ...reportWithNbsp,
+    inputs: reportWithNbsp.inputs.map(([k, v]) => [plain(k), plain(v)]),
+    outputs: reportWithNbsp.outputs.map(([k, v]) => [plain(k), plain(v)]),
+    assumptions: reportWithNbsp.assumptions?.map(plain),
   };
 
   return (
