@@ -138,6 +138,8 @@ describe('screens where optical power is entered show the cautions', () => {
 describe('dispersion screen', () => {
   it('draws D(λ) over 1200–1650 nm and finds λ0 for a typed standard-like fiber', async () => {
     const page = await open('dispersion');
+    // A chosen fiber folds to one line: open it to change the fiber.
+    if (!(await page.locator('#dispersion-source').isVisible())) await page.locator('.fiber-picker .picker-summary').first().click();
     await page.selectOption('#dispersion-source', 'typed');
     await page.fill('#f-dispersion-coreDiameterUm', '8.2');
     await page.fill('#f-dispersion-na', '0.123');
