@@ -11,6 +11,7 @@ import { DataTable } from '../../ui/DataTable';
 import { BarChart } from '../../ui/Plot';
 import { formatDb, formatFixed, withUnit } from '../../ui/format';
 import { sentence } from '../../ui/errorText';
+import { keepNumbersWhole } from '../../ui/prose';
 import type { ReportSpec } from '../../ui/copyText';
 import { useFiberPicker } from '../../ui/FiberPicker';
 import { findPreset } from '../../fibers/presets';
@@ -402,7 +403,7 @@ export default function Screen() {
             <p class="note">The highest loss is the acceptance value: a measured loss above it fails.</p>
             <ul class="note">
               {b.result.notes.map((n) => (
-                <li key={n}>{n}</li>
+                <li key={n}>{keepNumbersWhole(n)}</li>
               ))}
             </ul>
             {b.answers[0] && (
