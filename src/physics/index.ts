@@ -18,3 +18,4 @@ export * from './bending';
 export * from './modeField';
 export * from './singleMode';
 export * from './equivalentStepIndex';
+export * from './equipmentBudget';
