@@ -50,3 +50,11 @@ export function formatQuantity(v: number | undefined, unit: string, significant 
 function trimZeros(s: string): string {
   return s.includes('.') ? s.replace(/\.?0+$/, '') : s;
 }
+
+/**
+ * Name of an LP mode as the trade writes it: LP01, LP11, LP23; with a two-digit index the two
+ * indices are separated by a comma, so LP10,1 is never read as LP1,01 or LP101.
+ */
+export function lpName(l: number, m: number): string {
+  return l >= 10 || m >= 10 ? `LP${l},${m}` : `LP${l}${m}`;
+}
