@@ -39,11 +39,11 @@ function ResultLines({ r, what }: { r: LaunchSide; what: string }) {
 }
 
 /** The details: drawn once per result (memoised), not on every key typed. */
-function Details({ out, stale, error, fill }: { out: LaunchOutput | undefined; stale: boolean; error: string | undefined; fill: Fill }) {
+function Details({ out, stale, fill }: { out: LaunchOutput | undefined; stale: boolean; fill: Fill }) {
   const mfd = out && formatQuantity(out.singleModeMfdUm, 'µm', 3);
   return (
     <>
-      <ResultCard title="Single-mode into multimode" stale={stale} error={error}>
+      <ResultCard title="Single-mode into multimode" stale={stale}>
         {out && (
           <>
             <ResultLines r={out.forward} what="Power guided in the multimode fiber" />
@@ -135,7 +135,7 @@ export default function Screen() {
 
   // "Working…" is said once, in the headline (aria-busy); the details keep the last answer meanwhile,
   // so a key typed re-draws the inputs and the headline only.
-  const details = useMemo(() => <Details out={r} stale={res.stale} error={res.error} fill={fill} />, [r, res.stale, res.error, fill]);
+  const details = useMemo(() => <Details out={r} stale={res.stale} fill={fill} />, [r, res.stale, fill]);
 
   return (
     <CalcScreen
