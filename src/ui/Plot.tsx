@@ -49,11 +49,14 @@ const MAX_W = 760;
 /** Font sizes (CSS px, = user units), the same as in styles.css (.plot-tick, .plot-label). */
 export const PLOT_TICK_PX = 13;
 export const PLOT_LABEL_PX = 14;
-/** Widest glyph advance as a share of the font size, for sizing margins (digits ≈ 0.55, capitals up to 0.7). */
-const CHAR_EM = 0.62;
+/** Average glyph advance as a share of the font size, generous, for sizing margins: ticks (digits ≈ 0.55) and bold labels. */
+const TICK_EM = 0.62;
+const LABEL_EM = 0.68;
 const DASHES = ['', '8 5', '2 4', '12 4 2 4', '4 4'];
 
-const textWidth = (s: string, px: number) => s.length * px * CHAR_EM;
+const textWidth = (s: string, px: number) => s.length * px * (px >= PLOT_LABEL_PX ? LABEL_EM : TICK_EM);
+/** Centre of a text `width` wide, moved only as far as needed to keep it inside 0…W. */
+const keepInside = (centre: number, width: number, W: number) => Math.min(Math.max(centre, width / 2 + 2), W - width / 2 - 2);
 
 /** The figure's content width in CSS pixels, followed as the window or the layout changes. */
 function useFigureWidth(): [RefObject<HTMLElement>, number] {
@@ -136,8 +139,8 @@ function frameFor(W: number, xLabel: string, yLabel: string, yTickTexts: string[
 /** The two axis labels: x under the ticks, y rotated along the left edge. */
 function AxisLabels({ f }: { f: Frame }) {
   const { W, H, pad, xLines, yLines } = f;
-  const cx = (pad.left + W - pad.right) / 2;
-  const cy = (pad.top + H - pad.bottom) / 2;
+  const cx = keepInside((pad.left + W - pad.right) / 2, Math.max(...xLines.map((l) => textWidth(l, PLOT_LABEL_PX))), W);
+  const cy = keepInside((pad.top + H - pad.bottom) / 2, Math.max(...yLines.map((l) => textWidth(l, PLOT_LABEL_PX))), H);
   const xFirst = H - 6 - (xLines.length - 1) * (PLOT_LABEL_PX + 4);
   return (
     <>
@@ -204,7 +207,9 @@ export function LinePlot({ title, xLabel, yLabel, series, markers = [], points =
         {xTicks.map((t) => (
           <g key={`x${t}`}>
             <line x1={px(t)} x2={px(t)} y1={pad.top} y2={H - pad.bottom} class="plot-grid" />
-            <text x={px(t)} y={H - pad.bottom + 8 + PLOT_TICK_PX} text-anchor="middle" class="plot-tick">{tickText(t, logX)}</text>
+            <text x={keepInside(px(t), textWidth(tickText(t, logX), PLOT_TICK_PX), W)} y={H - pad.bottom + 8 + PLOT_TICK_PX} text-anchor="middle" class="plot-tick">
+              {tickText(t, logX)}
+            </text>
           </g>
         ))}
         {yTicks.map((t, i) => (
@@ -309,9 +314,15 @@ export function BarChart({ title, xLabel, yLabel, bars, formatValue = (v) => for
               <rect x={x} y={py(b.value)} width={w} height={Math.max(0, H - pad.bottom - py(b.value))} class="plot-bar" />
               {/* A value is written on its bar only where it fits the bar's slot. */}
               {textWidth(value, PLOT_TICK_PX) + 2 <= slot && (
-                <text x={x + w / 2} y={Math.max(pad.top + PLOT_TICK_PX, py(b.value) - 4)} text-anchor="middle" class="plot-tick">{value}</text>
+                <text x={keepInside(x + w / 2, textWidth(value, PLOT_TICK_PX), W)} y={Math.max(pad.top + PLOT_TICK_PX, py(b.value) - 4)} text-anchor="middle" class="plot-tick">
+                  {value}
+                </text>
               )}
-              {i % labelEvery === 0 && <text x={x + w / 2} y={H - pad.bottom + 8 + PLOT_TICK_PX} text-anchor="middle" class="plot-tick">{b.label}</text>}
+              {i % labelEvery === 0 && (
+                <text x={keepInside(x + w / 2, textWidth(b.label, PLOT_TICK_PX), W)} y={H - pad.bottom + 8 + PLOT_TICK_PX} text-anchor="middle" class="plot-tick">
+                  {b.label}
+                </text>
+              )}
             </g>
           );
         })}

@@ -16,7 +16,7 @@ export interface ModePictureProps {
 }
 
 const SIZE = 300;
-const PAD = { left: 44, bottom: 40, top: 10, right: 10 };
+const PAD = { left: 58, bottom: 40, top: 10, right: 12 };
 const TICKS = [-1.5, -1, -0.5, 0, 0.5, 1, 1.5];
 
 /**
@@ -91,7 +91,7 @@ export function ModePicture({ mode, cells = 72, extentOverA = 1.6 }: ModePicture
           </g>
         ))}
         <text x={PAD.left + inner / 2} y={SIZE - 6} text-anchor="middle" class="plot-label">x / core radius</text>
-        <text x={14} y={PAD.top + inner / 2} text-anchor="middle" class="plot-label" transform={`rotate(-90 14 ${PAD.top + inner / 2})`}>y / core radius</text>
+        <text x={18} y={PAD.top + inner / 2} text-anchor="middle" class="plot-label" transform={`rotate(-90 18 ${PAD.top + inner / 2})`}>y / core radius</text>
       </svg>
       <figcaption>
         <span class="plot-title">{name} intensity (denser shading = more light), cos {mode.l}φ orientation</span>
