@@ -31,7 +31,8 @@ async function focused(page: Page): Promise<Stop & { href: string | null; id: st
     if (!el || el === document.body) return { what: 'body', visibleFocus: false, href: null, id: '', name: '' };
     const s = getComputedStyle(el);
     const ring = (s.outlineStyle !== 'none' && parseFloat(s.outlineWidth) >= 2) || s.boxShadow !== 'none';
-    const name = (el.getAttribute('aria-label') ?? el.textContent ?? '').trim();
+    // Names compare with ordinary spaces: a value and its unit are joined by a no-break space on screen.
+    const name = (el.getAttribute('aria-label') ?? el.textContent ?? '').replace(/\s+/g, ' ').trim();
     return {
       what: `${el.tagName.toLowerCase()}${el.id ? '#' + el.id : ''} "${name.slice(0, 40)}"`,
       visibleFocus: ring,

@@ -11,7 +11,6 @@ import { DataTable } from '../../ui/DataTable';
 import { BarChart } from '../../ui/Plot';
 import { formatDb, formatFixed, withUnit } from '../../ui/format';
 import { sentence } from '../../ui/errorText';
-import { keepNumbersWhole } from '../../ui/prose';
 import type { ReportSpec } from '../../ui/copyText';
 import { useFiberPicker } from '../../ui/FiberPicker';
 import { findPreset } from '../../fibers/presets';
@@ -227,7 +226,7 @@ export default function Screen() {
       : `A measured loss above the highest fails acceptance (${b.result.ruleSet.name}).`,
   };
 
-  const reportWithNbsp: ReportSpec | undefined = b && {
+  const report: ReportSpec | undefined = b && {
     title: 'Link loss budget',
     inputs: [
       ['Fiber type', fiber?.name ?? '—'],
@@ -259,14 +258,6 @@ export default function Screen() {
     ],
   };
 
-  // Plain text pastes anywhere: ordinary spaces in the copied report.
-  const plain = (t: string) => t.replace(/\u00a0/g, ' ');
-  const report: ReportSpec | undefined = reportWithNbsp && {
-    ...reportWithNbsp,
-    inputs: reportWithNbsp.inputs.map(([k, v]) => [k, plain(v)]),
-    outputs: reportWithNbsp.outputs.map(([k, v]) => [k, plain(v)]),
-    assumptions: reportWithNbsp.assumptions?.map(plain),
-  };
 
   const toggleWavelength = (w: number, on: boolean) => setPicked({ ...picked, [w]: on });
 
@@ -403,7 +394,7 @@ export default function Screen() {
             <p class="note">The highest loss is the acceptance value: a measured loss above it fails.</p>
             <ul class="note">
               {b.result.notes.map((n) => (
-                <li key={n}>{keepNumbersWhole(n)}</li>
+                <li key={n}>{n}</li>
               ))}
             </ul>
             {b.answers[0] && (

@@ -86,7 +86,7 @@ export default function Screen() {
     more: ch && !chain.stale ? [{ label: 'At the end of the chain', value: dbm(ch.endDbm) }] : [],
   };
 
-  const reportWithNbsp: ReportSpec | undefined = c && {
+  const report: ReportSpec | undefined = c && {
     title: 'Optical power',
     inputs: [
       ['Power', dbm(c.dbm, 3)],
@@ -109,14 +109,6 @@ export default function Screen() {
   const stepArgs = steps.map((s) => `step-${s.id}`);
   const rows = ch ? [{ label: 'Start', lossDb: undefined, powerDbm: ch.startDbm, powerMw: ch.startMw }, ...ch.points] : [];
 
-  // Plain text pastes anywhere: ordinary spaces in the copied report.
-  const plain = (t: string) => t.replace(/\u00a0/g, ' ');
-  const report: ReportSpec | undefined = reportWithNbsp && {
-    ...reportWithNbsp,
-    inputs: reportWithNbsp.inputs.map(([k, v]) => [plain(k), plain(v)]),
-    outputs: reportWithNbsp.outputs.map(([k, v]) => [plain(k), plain(v)]),
-    assumptions: reportWithNbsp.assumptions?.map(plain),
-  };
 
   return (
     <CalcScreen

@@ -2,7 +2,6 @@
 // for the eye, where the hazard level comes from, and any caution this context adds to the usual ones.
 // Thin: the words come from physics. The usual cautions are listed once, by the laser-safety screen.
 import { USUAL_LASER_CAUTIONS, type HazardContext } from '../../physics';
-import { keepNumbersWhole as whole } from '../../ui/prose';
 
 /** The cautions this context adds to the usual list (high power, invisible light). */
 export function addedCautions(context: HazardContext): string[] {
@@ -13,13 +12,13 @@ export function HazardContextDetails({ context }: { context: HazardContext }) {
   const extra = addedCautions(context);
   return (
     <div class="hazard-context">
-      <p>{whole(context.wavelengthNote)}</p>
-      <p class={context.indicativeLevel ? 'verdict-bad' : undefined}>{whole(context.levelStatement)}</p>
-      {context.indicativeLevel && <p class="note">Source: {whole(context.indicativeLevel.source)}.</p>}
+      <p>{context.wavelengthNote}</p>
+      <p class={context.indicativeLevel ? 'verdict-bad' : undefined}>{context.levelStatement}</p>
+      {context.indicativeLevel && <p class="note">Source: {context.indicativeLevel.source}.</p>}
       {extra.length > 0 && (
         <ul>
           {extra.map((c) => (
-            <li key={c}>{whole(c)}</li>
+            <li key={c}>{c}</li>
           ))}
         </ul>
       )}

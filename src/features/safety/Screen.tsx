@@ -41,7 +41,7 @@ export default function Screen() {
     note: `${BAND_WORDS[c.band]}. Context only: your site’s rules and local codes govern.`,
   };
 
-  const reportWithNbsp: ReportSpec | undefined = c && {
+  const report: ReportSpec | undefined = c && {
     title: 'Laser hazard context',
     inputs: [
       ['Wavelength', withUnit(String(c.wavelengthNm), 'nm')],
@@ -55,14 +55,6 @@ export default function Screen() {
     assumptions: [...USUAL_LASER_CAUTIONS, ...addedCautions(c), GOVERNING_STATEMENT],
   };
 
-  // Plain text pastes anywhere: ordinary spaces in the copied report.
-  const plain = (t: string) => t.replace(/\u00a0/g, ' ');
-  const report: ReportSpec | undefined = reportWithNbsp && {
-    ...reportWithNbsp,
-    inputs: reportWithNbsp.inputs.map(([k, v]) => [plain(k), plain(v)]),
-    outputs: reportWithNbsp.outputs.map(([k, v]) => [plain(k), plain(v)]),
-    assumptions: reportWithNbsp.assumptions?.map(plain),
-  };
 
   return (
     <CalcScreen

@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { keepNumbersWhole } from '../../src/ui/prose';
+import { keepNumbersWithUnits as keepNumbersWhole } from '../../src/ui/keepTogether';
 
 const NB = '\u00a0';
 
-describe('numbers in physics prose stay whole on screen', () => {
+describe('numbers in physics prose stay whole on screen (the text rule every rendered text node goes through)', () => {
   it.each([
     ['at 1550 nm and 10 mW is set', `at 1550${NB}nm and 10${NB}mW is set`],
     ['maximum 0.75 dB per mated pair', `maximum 0.75${NB}dB per mated pair`],
