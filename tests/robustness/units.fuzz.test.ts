@@ -54,12 +54,19 @@ const HOSTILE_TEXTS = [
   '1_000',
   '9'.repeat(400),
   '0.' + '0'.repeat(60) + '1',
+  '0.5 milliwatt',
+  '\u22123 dBm',
+  '1\u2009550\u2009nm',
+  '1\u2009\u2009550',
 ];
 const numberPart = fc.oneof(
   fc.double({ min: -1e4, max: 1e4, noNaN: true }).map((x) => String(x)),
   fc.double({ min: -1e4, max: 1e4, noNaN: true }).map((x) => String(x).replace('.', ',')),
   fc.oneof(edgeNumber, anyDouble).map((x) => String(x)),
   fc.constantFrom('1e308', '1e-308', '5e-324', '-0', '0x10', '1,2,3', '١٥٥٠', '1e309'),
+  // Typography: minus U+2212, en dash U+2013, digits grouped by thin, narrow no-break and no-break spaces.
+  fc.tuple(fc.constantFrom('\u2212', '\u2013', '', '-'), fc.integer({ min: 1, max: 999 }), fc.array(fc.constantFrom('\u2009', '\u202f', '\u00a0', ' ', ''), { maxLength: 3 }), fc.integer({ min: 0, max: 999 }))
+    .map(([sign, a, seps, b]) => sign + String(a) + seps.map((sp) => sp + String(b).padStart(3, '0')).join('')),
 );
 const text = fc.oneof(
   { arbitrary: fc.tuple(numberPart, fc.constantFrom('', ' ', '  '), fc.constantFrom(...UNITS)).map(([n, sp, u]) => n + sp + u), weight: 6 },
