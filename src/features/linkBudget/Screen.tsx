@@ -19,6 +19,7 @@ import {
   linkBudgetReport,
   ownRuleSet,
   TIA_568_3_D,
+  TIA_568_C_3,
   TYPICAL_VALUES,
   type EquipmentVerdict,
   type FiberClass,
@@ -28,7 +29,7 @@ import {
 } from '../../physics';
 import { HazardContextCautions } from '../safety/HazardContext';
 
-type RuleChoice = 'tia' | 'typical' | 'own';
+type RuleChoice = 'tia' | 'tia-c3' | 'typical' | 'own';
 
 /** Core diameter from which a fiber counts as multimode when its category does not say (common practice). */
 const MULTIMODE_MIN_CORE_DIAMETER_UM = 20;
@@ -111,7 +112,9 @@ export default function Screen() {
     const ruleSet: LinkRuleSet =
       rules === 'tia'
         ? TIA_568_3_D
-        : rules === 'typical'
+        : rules === 'tia-c3'
+          ? TIA_568_C_3
+          : rules === 'typical'
           ? TYPICAL_VALUES
           : ownRuleSet({
               connectorPairDb: { minDb: need(own.conn[0]), typicalDb: need(own.conn[1]), maxDb: need(own.conn[2]) },
@@ -185,6 +188,7 @@ export default function Screen() {
           <label for="lb-rules">Loss allowances</label>
           <select id="lb-rules" value={rules} onChange={(e) => setRules((e.currentTarget as HTMLSelectElement).value as RuleChoice)}>
             <option value="tia">{TIA_568_3_D.name}</option>
+            <option value="tia-c3">{TIA_568_C_3.name}</option>
             <option value="typical">{TYPICAL_VALUES.name} (common practice)</option>
             <option value="own">Your own values</option>
           </select>
