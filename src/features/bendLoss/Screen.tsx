@@ -25,6 +25,7 @@ import {
   SILICA_P11,
   SILICA_P12,
   SILICA_POISSON_RATIO,
+  STRESS_RADIUS_FACTOR_SILICA,
   type BendRadiusModel,
 } from '../../physics';
 import type { BendSweepInput, BendSweepOutput } from './tasks';
@@ -219,7 +220,7 @@ export default function Screen() {
         source="Marcuse 1976, JOSA 66(3); stress correction Schermer & Cole 2007, IEEE JQE 43(10)"
         assumptions={[
           'The fiber is treated as a step-index fiber (for a category or a label: the equivalent step-index fiber).',
-          `Stress correction: R_eff = R / (1 − (n²/2)(p12 − ν(p11 + p12))) with p11 = ${SILICA_P11}, p12 = ${SILICA_P12}, ν = ${SILICA_POISSON_RATIO} for silica; about 1.28 R.`,
+          `Stress correction: R_eff = R / (1 − (n²/2)(p12 − ν(p11 + p12))) with p11 = ${SILICA_P11}, p12 = ${SILICA_P12}, ν = ${SILICA_POISSON_RATIO} for silica; ${STRESS_RADIUS_FACTOR_SILICA} R for a core index of 1.449.`,
           'Uniform bend, infinite cladding, no coating effects and no whispering-gallery reflections from the cladding edge.',
           'MFD by Petermann II at the chosen wavelength; cutoff from the fiber data, or the theoretical LP11 cutoff.',
         ]}
