@@ -43,8 +43,9 @@ export const MAX_FIELD_CHARS = 64;
  */
 const GROUP_SPACE = String.raw`[\u2009\u202f\u00a0]`;
 const INT_PART = String.raw`(?:\d{1,3}(?:${GROUP_SPACE}\d{3})+|\d+)`;
-const FRAC_PART = String.raw`(?:(?:\d{3}${GROUP_SPACE})*\d{1,3}|\d+)`;
-const NUMBER_RE = new RegExp(String.raw`^([+-]?(?:${INT_PART}(?:\.${FRAC_PART}?)?|\.${FRAC_PART})(?:e[+-]?\d+)?)\s*(.*)$`, 'i');
+const FRAC_PART = String.raw`(?:\d{3}${GROUP_SPACE})*\d+`;
+// (?!\d): the number ends where the digits end, so "0,0083 mm" is never read as 0.008 followed by a unit "3 mm".
+const NUMBER_RE = new RegExp(String.raw`^([+-]?(?:${INT_PART}(?:\.(?:${FRAC_PART})?)?|\.${FRAC_PART})(?:e[+-]?\d+)?)(?!\d)\s*(.*)$`, 'i');
 const GROUP_SPACES = /[\u2009\u202f\u00a0]/g;
 
 /**

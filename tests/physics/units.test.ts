@@ -64,12 +64,15 @@ describe('numbers as typography writes them', () => {
     ['\u00a01550\u00a0', 'wavelength', 1550],
     ['1e\u22123', 'plain', 0.001],
     ['+0,25 km', 'length', 0.25],
+    ['0,0083 mm', 'size', 8.3],
+    ['0.0012345', 'plain', 0.0012345],
+    ['1234.5678 m', 'length', 1.2345678],
   ] as const)('%j typed as a %s reads as %s', (text, kind, expected) => {
     expect(parseQuantity('x', text, kind).value, `input ${JSON.stringify(text)}`).toBeCloseTo(expected, 12);
   });
 
   // A group separator must separate groups of three: anything else is more likely a slip than a number.
-  it.each(['1\u200955', '1 550', '15\u20095\u20090', '1\u2009\u2009550', '\u22121\u2212 nm', '3\u20135'])('refuses %j', (text) => {
+  it.each(['1\u200955', '1 550', '15\u20095\u20090', '1\u2009\u2009550', '\u22121\u2212 nm', '3\u20135', '1\u20095500', '0.12\u2009345'])('refuses %j', (text) => {
     expect(() => parseQuantity('x', text, 'wavelength')).toThrow(InputError);
   });
 });
