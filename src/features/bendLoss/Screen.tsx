@@ -28,6 +28,7 @@ import {
   SILICA_P11,
   SILICA_P12,
   SILICA_POISSON_RATIO,
+  STRESS_RADIUS_FACTOR_SILICA,
   type BendRadiusModel,
   type MacrobendLimit,
 } from '../../physics';
@@ -205,7 +206,7 @@ export default function Screen() {
         source: 'Marcuse 1976, JOSA 66(3); stress correction Schermer & Cole 2007, IEEE JQE 43(10); limits ITU-T G.657 and G.652 (11/2016)',
         assumptions: [
           'The fiber is treated as a step-index fiber (for a category or a label: the equivalent step-index fiber).',
-          `Stress correction: R_eff = R / (1 − (n²/2)(p12 − ν(p11 + p12))) with p11 = ${SILICA_P11}, p12 = ${SILICA_P12}, ν = ${SILICA_POISSON_RATIO} for silica; about 1.28 R.`,
+          `Stress correction: R_eff = R / (1 − (n²/2)(p12 − ν(p11 + p12))) with p11 = ${SILICA_P11}, p12 = ${SILICA_P12}, ν = ${SILICA_POISSON_RATIO} for silica; ${STRESS_RADIUS_FACTOR_SILICA} R for a core index of 1.449.`,
           'Uniform bend, infinite cladding, no coating effects and no whispering-gallery reflections from the cladding edge.',
           'MFD by Petermann II at the chosen wavelength; cutoff from the fiber data, or the theoretical LP11 cutoff.',
           'Category limits: loss adds per turn; the 1550 nm limit bounds shorter wavelengths and the 1625 nm limit those up to 1625 nm, since a bend loses more at longer wavelengths.',

@@ -58,7 +58,7 @@ export function launchSide(r: LaunchResult): LaunchSide {
 
 export function launchTask(input: LaunchInput): LaunchOutput {
   const mfd = modeFieldDiameterUm({ ...input.singleMode, wavelengthNm: input.wavelengthNm, definition: 'petermann2' });
-  const field = input.fieldModel === 'gaussian' ? gaussianRadialField(mfd.mfdUm) : lp01RadialField(input.singleMode, input.wavelengthNm);
+  const field = input.fieldModel === 'gaussian' ? gaussianRadialField(mfd.mfdUm, input.wavelengthNm) : lp01RadialField(input.singleMode, input.wavelengthNm);
   const modes = multimodeModes(input.multimode, input.wavelengthNm);
   return {
     singleModeMfdUm: mfd.mfdUm,

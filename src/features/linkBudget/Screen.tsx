@@ -26,6 +26,7 @@ import {
   ownRuleSet,
   parseQuantity,
   TIA_568_3_D,
+  TIA_568_C_3,
   TYPICAL_VALUES,
   WINDOW_TOLERANCE_NM,
   type ElementLoss,
@@ -38,7 +39,7 @@ import {
   type WavelengthBudget,
 } from '../../physics';
 
-type RuleChoice = 'tia' | 'typical' | 'own';
+type RuleChoice = 'tia' | 'tia-c3' | 'typical' | 'own';
 type EquipmentMode = 'budget' | 'levels' | 'none';
 
 /** Core diameter from which a fiber counts as multimode when its category does not say (common practice). */
@@ -157,7 +158,9 @@ export default function Screen() {
     const ruleSet: LinkRuleSet =
       rules === 'tia'
         ? TIA_568_3_D
-        : rules === 'typical'
+        : rules === 'tia-c3'
+          ? TIA_568_C_3
+          : rules === 'typical'
           ? TYPICAL_VALUES
           : ownRuleSet({
               connectorPairDb: { minDb: need(own.conn[0]), typicalDb: need(own.conn[1]), maxDb: need(own.conn[2]) },
@@ -350,6 +353,7 @@ export default function Screen() {
               <label for="lb-rules">Loss allowances</label>
               <select id="lb-rules" value={rules} onChange={(e) => setRules((e.currentTarget as HTMLSelectElement).value as RuleChoice)}>
                 <option value="tia">{TIA_568_3_D.name}</option>
+            <option value="tia-c3">{TIA_568_C_3.name}</option>
                 <option value="typical">{TYPICAL_VALUES.name} (common practice)</option>
                 <option value="own">Your own values</option>
               </select>
