@@ -2,12 +2,9 @@
 // never as markup. With a thousand types only a page of rows is in the document: building and
 // diffing a thousand rows per key is what made Search slow on a phone.
 import type { FiberType } from '../../fibers/model';
-import type { IndexedType } from './query';
+import { PAGE_ROWS, rowFacts, type IndexedType } from './query';
 
 export { describeType } from './describe';
-
-/** Rows shown at first and added by each "Show more": a screenful or two on a phone. */
-export const PAGE_ROWS = 50;
 
 export interface FiberListProps {
   items: readonly IndexedType[];
@@ -30,18 +27,19 @@ interface RowProps {
 
 function Row({ item, onEdit, onDuplicate, onDelete, busy }: RowProps) {
   const r = item.record;
+  const { damaged, description } = rowFacts(r);
   return (
     <li class="fiber-item" data-fiber-id={r.id}>
       <p class="fiber-name">
         <strong>{typeof r.name === 'string' ? r.name : '(no name)'}</strong>
       </p>
-      <p class="fiber-desc">{item.damaged ? 'This record is damaged (it fails the checks); edit it to repair it, or delete it.' : item.description}</p>
+      <p class="fiber-desc">{damaged ? 'This record is damaged (it fails the checks); edit it to repair it, or delete it.' : description}</p>
       {typeof r.notes === 'string' && r.notes !== '' && <p class="fiber-notes note">{r.notes}</p>}
       <div class="row">
         <button type="button" disabled={busy} onClick={() => onEdit(r)} aria-label={`Edit ${r.name}`}>
           Edit
         </button>
-        <button type="button" disabled={busy || item.damaged} onClick={() => onDuplicate(r)} aria-label={`Duplicate ${r.name}`}>
+        <button type="button" disabled={busy || damaged} onClick={() => onDuplicate(r)} aria-label={`Duplicate ${r.name}`}>
           Duplicate
         </button>
         <button type="button" disabled={busy} onClick={() => onDelete(r)} aria-label={`Delete ${r.name}`}>

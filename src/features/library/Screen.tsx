@@ -1,13 +1,12 @@
 // Fiber types: the saved library (list, search, add, edit, duplicate, delete with undo), the
 // standard categories to clone, backup and restore, storage status, and the demo library.
-import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
+import { useEffect, useRef, useState } from 'preact/hooks';
 import { useLibrary } from './useLibrary';
-import { FiberList, PAGE_ROWS } from './FiberList';
+import { SavedList } from './SavedList';
 import { FiberForm, type SaveChoice, type SaveOutcome } from './FiberForm';
 import { PresetList } from './PresetList';
 import { BackupPanel } from './BackupPanel';
 import { StoragePanel } from './StoragePanel';
-import { buildIndex, search, type SortOrder } from './query';
 import { describeType } from './describe';
 import { askAfterSave } from './persistence';
 import { draftFromPreset, draftFromRecord, emptyDraft, type FiberDraft } from './draft';
@@ -25,9 +24,6 @@ const UNDO_MS = 15_000;
 
 export default function Screen() {
   const lib = useLibrary();
-  const [query, setQuery] = useState('');
-  const [order, setOrder] = useState<SortOrder>('name');
-  const [shownRows, setShownRows] = useState(PAGE_ROWS);
   const [view, setView] = useState<View>({ kind: 'list' });
   const [undo, setUndo] = useState<FiberType | undefined>(undefined);
   const [flash, setFlash] = useState<{ ok: boolean; text: string } | undefined>(undefined);
@@ -36,10 +32,6 @@ export default function Screen() {
   const undoTimer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   useEffect(() => () => clearTimeout(undoTimer.current), []);
 
-  // The index is rebuilt only when the library changes; a key in Search filters it (no sort, no
-  // per-row checks), and only a page of rows is rendered.
-  const index = useMemo(() => buildIndex(lib.records ?? []), [lib.records]);
-  const shown = useMemo(() => search(index, query, order), [index, query, order]);
   const store = lib.store && lib.status === 'open' ? lib.store : undefined;
 
   const openForm = (title: string, submitLabel: string, draft: FiberDraft, editId?: string, base?: FiberType) => {
@@ -167,54 +159,10 @@ export default function Screen() {
               Enter from a label
             </button>
           </div>
-          <div class="form">
-            <div class="field">
-              <label for="lib-search">Search</label>
-              <input
-                id="lib-search"
-                type="search"
-                value={query}
-                maxLength={80}
-                onInput={(e) => {
-                  setQuery((e.currentTarget as HTMLInputElement).value);
-                  setShownRows(PAGE_ROWS);
-                }}
-              />
-            </div>
-            <div class="field">
-              <label for="lib-order">Order</label>
-              <select
-                id="lib-order"
-                value={order}
-                onChange={(e) => {
-                  setOrder((e.currentTarget as HTMLSelectElement).value as SortOrder);
-                  setShownRows(PAGE_ROWS);
-                }}
-              >
-                <option value="name">By name</option>
-                <option value="recent">Most recently changed first</option>
-              </select>
-            </div>
-          </div>
           {lib.records === undefined ? (
             lib.status === 'unavailable' ? <p class="note">No saved types can be shown.</p> : <p class="loading">Opening the library…</p>
-          ) : lib.records.length === 0 ? (
-            <p class="note">No fiber types saved yet. Add one, clone a standard category below, or load the demo library.</p>
           ) : (
-            <>
-              <p id="lib-count" class="note" aria-live="polite">
-                {query.trim() === '' ? `${lib.records.length} saved.` : `${shown.length} of ${lib.records.length} match.`}
-              </p>
-              <FiberList
-                items={shown}
-                shownRows={shownRows}
-                onShowMore={() => setShownRows((n) => n + PAGE_ROWS)}
-                onEdit={edit}
-                onDuplicate={duplicate}
-                onDelete={remove}
-                busy={busy || !store}
-              />
-            </>
+            <SavedList records={lib.records} onEdit={edit} onDuplicate={duplicate} onDelete={remove} busy={busy || !store} />
           )}
         </section>
       )}

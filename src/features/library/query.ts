@@ -1,30 +1,54 @@
 // The list's data path: search and order. Pure, so the bench can time it without a DOM.
 //
-// With a thousand saved types on a slow phone, the work per key must be small: everything that
-// depends only on the records (the text searched, the two orders, whether a record passes the
-// checks, the line describing it) is computed once when the records change (buildIndex); a key in
-// Search then only filters a list already in order (search), and the screen renders one page of it.
+// With a thousand saved types on a slow phone, the work per key must be small: what depends only on
+// the records (the text searched, the order by name) is computed once when the records change
+// (buildIndex); a key in Search then only filters a list already in order (search), and the screen
+// renders one page of it. What only a shown row needs (its checks and its line of description) is
+// computed when the row is first shown and kept (rowFacts), so opening the screen does not check
+// and describe a thousand records to show fifty.
 import { nameKeyOf, type FiberType } from '../../fibers/model';
 import { validateRecord } from '../../fibers/validate';
 import { describeType } from './describe';
 
 export type SortOrder = 'name' | 'recent';
 
-/** A record with what the list needs of it, computed once per change of the library. */
+/** Rows shown at first and added by each "Show more": a screenful or two on a phone. */
+export const PAGE_ROWS = 25;
+
+/** A record with what a search needs of it, computed once per change of the library. */
 export interface IndexedType {
   record: FiberType;
   /** Name key, category and notes, lower-cased: what a query's words are looked for in. */
   haystack: string;
+}
+
+export interface LibraryIndex {
+  byName: IndexedType[];
+  /** Built on first use: most people never change the order. */
+  readonly byRecent: IndexedType[];
+  size: number;
+}
+
+export interface RowFacts {
   /** Fails the checks (a damaged or tampered record): listed with a warning, not described. */
   damaged: boolean;
   /** The one-line description shown under the name (empty when damaged). */
   description: string;
 }
 
-export interface LibraryIndex {
-  byName: IndexedType[];
-  byRecent: IndexedType[];
-  size: number;
+// Records are never changed in place (every change from the store is a new object), so the facts of
+// a record object stay true for as long as it lives.
+const FACTS = new WeakMap<FiberType, RowFacts>();
+
+/** The checks and the description of one record, computed on first use and kept. */
+export function rowFacts(r: FiberType): RowFacts {
+  let f = FACTS.get(r);
+  if (!f) {
+    const damaged = !validateRecord(r).ok;
+    f = { damaged, description: damaged ? '' : describeType(r) };
+    FACTS.set(r, f);
+  }
+  return f;
 }
 
 function byNameKey(a: IndexedType, b: IndexedType): number {
@@ -35,20 +59,23 @@ function byNameKey(a: IndexedType, b: IndexedType): number {
   return ka < kb ? -1 : ka > kb ? 1 : ia < ib ? -1 : ia > ib ? 1 : 0;
 }
 
-/** Builds the search text, checks, descriptions and both orders once; O(n log n), per change only. */
+/** Builds the search text and the order by name once, per change of the library only. */
 export function buildIndex(records: readonly FiberType[]): LibraryIndex {
-  const items: IndexedType[] = records.map((r) => {
-    const damaged = !validateRecord(r).ok;
-    return {
-      record: r,
-      haystack: `${typeof r.nameKey === 'string' ? r.nameKey : ''} ${typeof r.category === 'string' ? r.category.toLowerCase() : ''} ${typeof r.notes === 'string' ? r.notes.toLowerCase() : ''}`,
-      damaged,
-      description: damaged ? '' : describeType(r),
-    };
-  });
+  const items: IndexedType[] = records.map((r) => ({
+    record: r,
+    haystack: `${typeof r.nameKey === 'string' ? r.nameKey : ''} ${typeof r.category === 'string' ? r.category.toLowerCase() : ''} ${typeof r.notes === 'string' ? r.notes.toLowerCase() : ''}`,
+  }));
+  // The store lists by name already: this sort only confirms the order (linear on sorted input).
   const byName = items.sort(byNameKey);
-  const byRecent = [...byName].sort((a, b) => (b.record.updatedAt ?? 0) - (a.record.updatedAt ?? 0) || byNameKey(a, b));
-  return { byName, byRecent, size: items.length };
+  let byRecent: IndexedType[] | undefined;
+  return {
+    byName,
+    get byRecent() {
+      byRecent ??= [...byName].sort((a, b) => (b.record.updatedAt ?? 0) - (a.record.updatedAt ?? 0) || byNameKey(a, b));
+      return byRecent;
+    },
+    size: items.length,
+  };
 }
 
 /** The words of a query: normalised like names, so "  DRUM   12 " finds "Drum 12". */
