@@ -190,8 +190,8 @@ export interface ApplicationCheck {
 /** Longest link accepted (m): beyond every interface listed. */
 export const MAX_APPLICATION_LINK_M = 200_000;
 /** Loss readings accepted (dB): a slightly negative reading is a reference error, kept as typed. */
-export const MIN_LINK_LOSS_DB = -5;
-export const MAX_LINK_LOSS_DB = 100;
+export const MIN_APPLICATION_LOSS_DB = -5;
+export const MAX_APPLICATION_LOSS_DB = 100;
 
 const MULTIMODE_WINDOWS: readonly LossWindow[] = [850, 1300];
 const SINGLE_MODE_WINDOWS: readonly LossWindow[] = [1310, 1550];
@@ -216,7 +216,7 @@ export function applicationsForLink(input: { category: FiberCategory; lengthM: n
     const w = Number(key) as LossWindow;
     if (!windows.includes(w)) throw new InputError('lossDbByWindow', key, `losses at ${windows.join(' or ')} nm for ${category} fiber`);
     if (value === undefined) continue;
-    losses.set(w, requireNumber(`lossDbByWindow[${key}]`, value, { min: MIN_LINK_LOSS_DB, max: MAX_LINK_LOSS_DB, unit: 'dB' }));
+    losses.set(w, requireNumber(`lossDbByWindow[${key}]`, value, { min: MIN_APPLICATION_LOSS_DB, max: MAX_APPLICATION_LOSS_DB, unit: 'dB' }));
   }
   return ETHERNET_INTERFACES.map((itf) => {
     const row = itf.reaches.find((r) => r.category === category);

@@ -22,3 +22,4 @@ export * from './encircledFlux';
 export * from './mandrel';
 export * from './offsetLaunch';
 export * from './ethernetReach';
+export * from './equipmentBudget';

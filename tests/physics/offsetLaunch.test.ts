@@ -15,7 +15,7 @@ describe('power per mode group against offset', () => {
   // Tolerance 5e-4: the profile is cut at r = a and the FD fields carry ~1e-4 error (as in coupling.test.ts).
   it.each([3, 6])('a matched spot offset by %d µm fills the groups as a Poisson law', (d) => {
     const w = 25 * Math.sqrt(2 / at850.v);
-    const [point] = offsetLaunchSweep({ source: gaussianRadialField(2 * w), modes: at850, coreRadiusUm: 25, offsetsUm: [d] });
+    const [point] = offsetLaunchSweep({ source: gaussianRadialField(2 * w, 850), modes: at850, coreRadiusUm: 25, offsetsUm: [d] });
     const mu = (d * d) / (w * w);
     let fact = 1;
     for (let g = 1; g <= 6; g++) {
@@ -27,7 +27,7 @@ describe('power per mode group against offset', () => {
   it('a centred 9.2 µm spot at 1300 nm puts most of its power in the lowest group; the cord offsets move it to the middle groups', () => {
     // Why the offset cord exists (IEEE 802.3 clause 38.11.4): the centre launch lights the few groups that travel
     // along the axis, where an index defect does the most harm; 10–16 µm off the axis, groups 1–2 carry little.
-    const [centre, ...cord] = offsetLaunchSweep({ source: gaussianRadialField(9.2), modes: at1300, coreRadiusUm: 25, offsetsUm: [0, 10, 13, 16] });
+    const [centre, ...cord] = offsetLaunchSweep({ source: gaussianRadialField(9.2, 1300), modes: at1300, coreRadiusUm: 25, offsetsUm: [0, 10, 13, 16] });
     const low = (p: typeof centre) => p.perGroup.filter((g) => g.principal <= 2).reduce((s, g) => s + g.fraction, 0);
     expect(low(centre)).toBeGreaterThan(0.8);
     for (const p of cord) expect(low(p)).toBeLessThan(0.3);
@@ -36,12 +36,12 @@ describe('power per mode group against offset', () => {
 
   it('the share of power near the axis falls steadily as the spot moves out', () => {
     const offsets = [0, 2, 4, 6, 8, 10, 12, 14, 16];
-    const sweep = offsetLaunchSweep({ source: gaussianRadialField(9.2), modes: at1300, coreRadiusUm: 25, offsetsUm: offsets });
+    const sweep = offsetLaunchSweep({ source: gaussianRadialField(9.2, 1300), modes: at1300, coreRadiusUm: 25, offsetsUm: offsets });
     for (let i = 1; i < sweep.length; i++) expect(sweep[i].centreShare).toBeLessThan(sweep[i - 1].centreShare);
   });
 
   it('inside the core the launch loses almost nothing; near the core edge it starts to lose (guided share < 1)', () => {
-    const [inside, edge] = offsetLaunchSweep({ source: gaussianRadialField(9.2), modes: at1300, coreRadiusUm: 25, offsetsUm: [10, 24] });
+    const [inside, edge] = offsetLaunchSweep({ source: gaussianRadialField(9.2, 1300), modes: at1300, coreRadiusUm: 25, offsetsUm: [10, 24] });
     expect(inside.lossDb).toBeLessThan(0.05);
     expect(edge.lossDb).toBeGreaterThan(0.3);
   });
@@ -62,7 +62,7 @@ describe('mode-conditioning cord offsets', () => {
   });
 
   it('an empty or overlong list of offsets is refused', () => {
-    expect(() => offsetLaunchSweep({ source: gaussianRadialField(9.2), modes: at1300, coreRadiusUm: 25, offsetsUm: [] })).toThrow(InputError);
-    expect(() => offsetLaunchSweep({ source: gaussianRadialField(9.2), modes: at1300, coreRadiusUm: 25, offsetsUm: new Array(65).fill(1) })).toThrow(InputError);
+    expect(() => offsetLaunchSweep({ source: gaussianRadialField(9.2, 1300), modes: at1300, coreRadiusUm: 25, offsetsUm: [] })).toThrow(InputError);
+    expect(() => offsetLaunchSweep({ source: gaussianRadialField(9.2, 1300), modes: at1300, coreRadiusUm: 25, offsetsUm: new Array(65).fill(1) })).toThrow(InputError);
   });
 });

@@ -69,7 +69,7 @@ export function launchPowers(fiber: MultimodeFiberSpec, wavelengthNm: number, mo
     case 'overfilled':
       return { powers: overfilledModePowers({ modes }), guidedShare: 1, lossDb: 0 };
     case 'single-mode': {
-      const r = singleModeToMultimode({ source: gaussianRadialField(launch.mfdUm), modes, offsetUm: launch.offsetUm });
+      const r = singleModeToMultimode({ source: gaussianRadialField(launch.mfdUm, wavelengthNm), modes, offsetUm: launch.offsetUm });
       return { powers: r.perMode.map((m) => m.fraction), guidedShare: r.coupledFraction, lossDb: r.lossDb };
     }
     case 'mandrel': {
@@ -183,7 +183,7 @@ export interface OffsetTaskOutput {
 export function offsetTask(input: OffsetTaskInput): OffsetTaskOutput {
   const { fiber, wavelengthNm } = input;
   const modes = multimodeModes(fiber, wavelengthNm);
-  const source = gaussianRadialField(input.mfdUm);
+  const source = gaussianRadialField(input.mfdUm, wavelengthNm);
   const steps = Math.min(40, Math.max(2, Math.round(fiber.coreRadiusUm)));
   const offsets = Array.from({ length: steps + 1 }, (_, i) => (fiber.coreRadiusUm * i) / steps);
   const sweep = offsetLaunchSweep({ source, modes, coreRadiusUm: fiber.coreRadiusUm, offsetsUm: offsets }).map(({ powers: _powers, ...rest }) => rest);

@@ -9,7 +9,7 @@ import { CalcScreen, ShortProse, type Headline } from '../../ui/CalcScreen';
 import { DataTable } from '../../ui/DataTable';
 import { formatDb, formatNumber, withUnit } from '../../ui/format';
 import type { ReportSpec } from '../../ui/copyText';
-import { applicationsForLink, FIBER_CATEGORIES, InputError, MAX_APPLICATION_LINK_M, MAX_LINK_LOSS_DB, MIN_LINK_LOSS_DB, type ApplicationCheck, type FiberCategory, type LossWindow } from '../../physics';
+import { applicationsForLink, FIBER_CATEGORIES, InputError, MAX_APPLICATION_LINK_M, MAX_APPLICATION_LOSS_DB, MIN_APPLICATION_LOSS_DB, type ApplicationCheck, type FiberCategory, type LossWindow } from '../../physics';
 
 const M_PER_KM = 1000;
 
@@ -61,7 +61,7 @@ export default function Screen() {
       if (e instanceof InputError && e.argument === 'lengthM') throw new InputError(length.argument, lengthKm, `a number from 0 to ${MAX_APPLICATION_LINK_M / M_PER_KM} km`);
       if (e instanceof InputError && e.argument.startsWith('lossDbByWindow[')) {
         const q = e.argument.includes(String(windows[0])) ? loss1 : loss2;
-        throw new InputError(q.argument, e.value, `a number from ${MIN_LINK_LOSS_DB} to ${MAX_LINK_LOSS_DB} dB`);
+        throw new InputError(q.argument, e.value, `a number from ${MIN_APPLICATION_LOSS_DB} to ${MAX_APPLICATION_LOSS_DB} dB`);
       }
       throw e;
     }
