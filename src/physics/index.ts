@@ -18,3 +18,8 @@ export * from './bending';
 export * from './modeField';
 export * from './singleMode';
 export * from './equivalentStepIndex';
+export * from './otdrSetup';
+export * from './backscatter';
+export * from './reflectance';
+export * from './pmd';
+export * from './bendOrSplice';
