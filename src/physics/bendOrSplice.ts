@@ -20,8 +20,8 @@ export const DEFAULT_READING_TOLERANCE_DB = 0.03;
 /** Radii searched for a bend (mm): tighter than 2 mm breaks most coated fibers; beyond 60 mm a single-mode fiber loses nothing measurable. Common practice. */
 export const BEND_SEARCH_MIN_MM = 2;
 export const BEND_SEARCH_MAX_MM = 60;
-/** Radius grid step of the search (mm): 0.02 mm, finer than any radius a technician could act on. */
-const BEND_SEARCH_STEP_MM = 0.02;
+/** Radius grid step of the search (mm): 0.05 mm, finer than any radius a technician could act on or measure. */
+const BEND_SEARCH_STEP_MM = 0.05;
 /** Most turns one event can hold: a coil of more than 100 loops is not one place on a trace. Common practice. */
 export const MAX_BEND_TURNS = 100;
 /** Below this length of bent fiber (mm) a fitted "bend" is a kink or point pressure (crush, tight tie), not a loop. */
@@ -86,7 +86,7 @@ export interface BendOrSpliceResult {
   /** Readings sorted by wavelength. */
   readings: EventReading[];
   toleranceDb: number;
-  /** Ratio of the loss at the longest wavelength to the shortest (undefined when the shortest is ≤ 0). */
+  /** Ratio of the loss at the longest wavelength to the shortest (undefined when the shortest is within the uncertainty). */
   lossRatio?: number;
   /** MFD (Petermann II) of the fiber at each reading's wavelength (µm). */
   mfdUm: number[];
@@ -257,7 +257,7 @@ export function classifyEvent(input: BendOrSpliceInput): BendOrSpliceResult {
   const first = obs[0]!;
   const last = obs[obs.length - 1]!;
   const result: BendOrSpliceResult = { verdict, readings, toleranceDb: tol, mfdUm, splice, bend, hasGain };
-  if (first > 0) result.lossRatio = last / first;
+  if (first > tol) result.lossRatio = last / first; // a ratio to a loss inside the uncertainty means nothing
   return result;
 }
 

@@ -147,7 +147,8 @@ export function groupIndexEffect(input: { shownKm: number; groupIndexSet: number
   return {
     shownKm,
     trueKm,
-    errorM: (shownKm - trueKm) * M_PER_KM,
+    // z·(n_true − n_set)/n_true rather than shown − true: no cancellation, exactly 0 for the right index.
+    errorM: (shownKm * (nTrue - nSet) * M_PER_KM) / nTrue,
     errorPer10KmPerMilliIndexM: (10 * M_PER_KM * 0.001) / nTrue,
   };
 }
