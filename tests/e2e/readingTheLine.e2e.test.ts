@@ -67,11 +67,22 @@ describe('bend or splice, read from the headline <output>', () => {
     await page.close();
   });
 
-  it('the copied text is one report naming the verdict', async () => {
+  it('Copy as text gives one report with the readings and the verdict', async () => {
     const page = await open('bend-or-splice');
-    await headline(page);
-    const copy = page.getByRole('button', { name: 'Copy as text' });
-    await expect(copy.count()).resolves.toBeGreaterThan(0);
+    await page.fill('#f-loss1310Db', '0.05');
+    await page.fill('#f-loss1550Db', '0.40');
+    await expect.poll(() => headline(page), { timeout: 15_000 }).toMatch(/\bBend\b/);
+    // Catch what the page hands to the clipboard (the headless clipboard may be closed to the page).
+    await page.evaluate(() => {
+      Object.defineProperty(navigator, 'clipboard', { configurable: true, value: { writeText: async (t: string) => void ((window as unknown as { copied: string }).copied = t) } });
+    });
+    await page.getByRole('button', { name: 'Copy as text' }).click();
+    const copied = await page.waitForFunction(() => (window as unknown as { copied?: string }).copied).then((h) => h.jsonValue() as Promise<string>);
+    expect(copied.match(/^Bend or splice\? One event at several wavelengths$/gm)).toHaveLength(1);
+    expect(copied).toMatch(/^ {2}Loss at 1310 nm: 0\.05 dB$/m);
+    expect(copied).toMatch(/^ {2}Loss at 1550 nm: 0\.4 dB$/m);
+    expect(copied).toMatch(/^ {2}Verdict: Bend: loss rises steeply with wavelength$/m);
+    expect(copied).toMatch(/^ {2}Splice model: does not fit/m);
     await page.close();
   });
 });
