@@ -239,7 +239,9 @@ export default function Screen() {
             </dl>
             <ShortProse text="The fiber’s own mode catches back only a small share of the light it scatters; a narrower mode catches more. Where two fibers of different mode field meet, the trace steps by half the difference, which one direction shows as a gain. The OTDR splice reading screen takes this further." />
             <p>
-              <a href="#/otdr-splice">Open the OTDR splice reading</a>
+              <button type="button" onClick={() => (location.hash = '#/otdr-splice')}>
+                Open the OTDR splice reading
+              </button>
             </p>
           </>
         )}

@@ -171,9 +171,8 @@ export default function Screen() {
           rows={PMDQ_BY_CATEGORY}
           rowKey={(q) => q.category}
           columns={[
-            { label: 'Category', cell: (q) => q.category },
+            { label: 'Category (recommendation)', cell: (q) => `${q.category} (${q.recommendation})` },
             { label: 'PMDQ', cell: (q) => formatQuantity(q.pmdqPsPerSqrtKm, 'ps/√km', 2), num: true },
-            { label: 'Recommendation', cell: (q) => q.recommendation },
           ]}
         />
       </ResultCard>
