@@ -92,7 +92,7 @@ export default function Screen() {
   const headline: Headline | undefined = s && {
     label: 'Resolution',
     value: formatQuantity(s.extent.twoPointResolutionM, 'm', 3),
-    verdict: `with a ${shownValue(pulse, 'ns')} pulse`,
+    verdict: `with a ${formatQuantity(pulse.value, 'ns', 6)} pulse`,
     tone: 'info',
     more: [
       { label: 'Along the jacket', value: formatQuantity(s.cable.cableKm, 'km', 5), verdict: `for ${formatQuantity(s.cable.fiberKm, 'km', 5)} on the trace` },

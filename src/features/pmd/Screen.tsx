@@ -69,7 +69,7 @@ export default function Screen() {
   const calc = { errorArgument: state.errorArgument === undefined ? undefined : argumentFor[state.errorArgument] ?? state.errorArgument, fault: state.fault };
   const fieldArgs = [...Object.keys(argumentFor), ownRate.argument, ownShare.argument, dgd.argument, 'linkPmdPs'];
   const r = state.result;
-  const signalName = r?.signal?.name ?? `${shownValue(ownRate, 'GBd')} signal`;
+  const signalName = r?.signal?.name ?? `${formatQuantity(ownRate.value, 'GBd', 6)} signal`;
 
   const headline: Headline | undefined = r && {
     label: 'Link PMD',
@@ -151,7 +151,7 @@ export default function Screen() {
           <dl class="kv">
             <dt>Tolerated PMD for {signalName}</dt>
             <dd class="num">{formatQuantity(r.verdict.maxPmdPs, 'ps', 3)}</dd>
-            <dt>DGD above {shownValue(dgd, 'ps')}</dt>
+            <dt>DGD above {formatQuantity(dgd.value, 'ps', 6)}</dt>
             <dd>{oddsWords(r.exceed)}</dd>
             {r.levels.map((l) => (
               <Fragment key={l.p}>

@@ -173,7 +173,7 @@ export default function Screen() {
         <ResultCard title="Reflectance and return loss side by side" stale={state.stale}>
           <DataTable
             caption="Faces, gaps and polishes"
-            rows={[...s.table, { label: `Your gap of ${shownValue(gap, 'µm')}`, reflection: s.gapR.atGap!, source: 'Airy etalon at this width and wavelength' }]}
+            rows={[...s.table, { label: `Your gap of ${formatQuantity(gap.value, 'µm', 6)}`, reflection: s.gapR.atGap!, source: 'Airy etalon at this width and wavelength' }]}
             rowKey={(x) => x.label}
             columns={[
               { label: 'What', cell: (x) => x.label },
