@@ -73,7 +73,8 @@ export default function Screen() {
   const r = state.result;
   const isBendInsensitive = fiber?.category?.startsWith('G.657') ?? false;
 
-  const rangeWords = (lo: number, hi: number) => `${formatNumber(lo, 2)}\u00a0to\u00a0${formatQuantity(hi, 'mm', 2)}`;
+  // Each number keeps its unit; the words between may wrap (a long unbreakable run would be split by the browser).
+  const rangeWords = (lo: number, hi: number) => `${formatQuantity(lo, 'mm', 2)} to ${formatQuantity(hi, 'mm', 2)}`;
   const bendLine =
     r?.bend.fits && r.bend.bendRadiusMm !== undefined
       ? `about ${formatQuantity(r.bend.bendRadiusMm, 'mm', 2)} radius (${rangeWords(r.bend.radiusRangeMm![0], r.bend.radiusRangeMm![1])}), ${turnsWords(r.bend.turns!)}`
