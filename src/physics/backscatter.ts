@@ -25,6 +25,10 @@ export const BACKSCATTER_DEFAULT_FIBER_INDEX = 1.46;
 export const TYPICAL_RAYLEIGH_DB_UM4_PER_KM = 0.9;
 /** Largest scattering or attenuation accepted (dB/km): far above any fiber, below numbers that lose meaning. */
 export const MAX_FIBER_LOSS_DB_PER_KM = 100;
+/** Smallest scattering loss accepted (dB/km): a millionth of any real fiber's, and far from underflow (a subnormal gave −Infinity dB). */
+export const MIN_SCATTERING_DB_PER_KM = 1e-6;
+/** Shortest length for a backscatter return loss (km): 1 mm. */
+export const MIN_BACKSCATTER_LENGTH_KM = 1e-6;
 
 function requireIndex(argument: string, value: unknown): number {
   return requireNumber(argument, value ?? BACKSCATTER_DEFAULT_FIBER_INDEX, { min: GROUP_INDEX_MIN, max: GROUP_INDEX_MAX });
@@ -89,7 +93,7 @@ export interface BackscatterLevel {
 /** Backscatter level P_bs/P_0 = S·α_s·Δz for a pulse (Personick 1977, BSTJ 56(3)); S from Brinkmeyer 1980. */
 export function backscatterLevel(input: BackscatterInput): BackscatterLevel {
   const s = backscatterCaptureFraction({ mfdUm: input?.mfdUm, wavelengthNm: input?.wavelengthNm, fiberIndex: input?.fiberIndex });
-  const scatter = requireNumber('scatteringDbPerKm', input.scatteringDbPerKm, { min: 0, max: MAX_FIBER_LOSS_DB_PER_KM, minInclusive: false, unit: 'dB/km' });
+  const scatter = requireNumber('scatteringDbPerKm', input.scatteringDbPerKm, { min: MIN_SCATTERING_DB_PER_KM, max: MAX_FIBER_LOSS_DB_PER_KM, unit: 'dB/km' });
   const extent = pulseSpatialExtent({ pulseWidthNs: input.pulseWidthNs, groupIndex: input.groupIndex });
   const scatteringPerM = scatter / DB_PER_NEPER / M_PER_KM;
   const oneNs = pulseSpatialExtent({ pulseWidthNs: 1, groupIndex: input.groupIndex }).twoPointResolutionM;
@@ -122,9 +126,9 @@ export interface BackscatterReturnLoss {
  */
 export function backscatterReturnLoss(input: { mfdUm: number; wavelengthNm: number; scatteringDbPerKm: number; attenuationDbPerKm: number; lengthKm: number; fiberIndex?: number }): BackscatterReturnLoss {
   const s = backscatterCaptureFraction({ mfdUm: input?.mfdUm, wavelengthNm: input?.wavelengthNm, fiberIndex: input?.fiberIndex }).fraction;
-  const scatter = requireNumber('scatteringDbPerKm', input.scatteringDbPerKm, { min: 0, max: MAX_FIBER_LOSS_DB_PER_KM, minInclusive: false, unit: 'dB/km' });
+  const scatter = requireNumber('scatteringDbPerKm', input.scatteringDbPerKm, { min: MIN_SCATTERING_DB_PER_KM, max: MAX_FIBER_LOSS_DB_PER_KM, unit: 'dB/km' });
   const atten = requireNumber('attenuationDbPerKm', input.attenuationDbPerKm, { min: scatter, max: MAX_FIBER_LOSS_DB_PER_KM, unit: 'dB/km', hint: 'the total attenuation includes the scattering loss, so it cannot be smaller' });
-  const lengthKm = requireNumber('lengthKm', input.lengthKm, { min: 0, max: 1000, minInclusive: false, unit: 'km' });
+  const lengthKm = requireNumber('lengthKm', input.lengthKm, { min: MIN_BACKSCATTER_LENGTH_KM, max: 1000, unit: 'km' });
   const alphaPerKm = atten / DB_PER_NEPER; // power attenuation, 1/km
   const alphaSPerKm = scatter / DB_PER_NEPER;
   const limitFraction = (s * alphaSPerKm) / (2 * alphaPerKm);
