@@ -23,3 +23,4 @@ export * from './backscatter';
 export * from './reflectance';
 export * from './pmd';
 export * from './bendOrSplice';
+export * from './equipmentBudget';

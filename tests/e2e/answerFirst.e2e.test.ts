@@ -278,6 +278,32 @@ describe.each([
   });
 });
 
+describe('home for twenty tools', () => {
+  it('groups the tools by the situation the user is in, finds a tool by any word of its title or summary, and puts the last three used on top', async () => {
+    const { context, page } = await open(PHONE, '');
+    try {
+      const groups = await page.locator('main section h2').allTextContents();
+      expect(groups).toEqual(expect.arrayContaining(['At the splice tray', 'Planning a link', 'My fiber types']));
+      await page.locator('#tool-filter').fill('splice');
+      await expect.poll(() => page.locator('main a.feature-link .feature-title').allTextContents()).toEqual(expect.arrayContaining(['Joint loss', 'OTDR splice reading']));
+      expect(await page.locator('main a.feature-link .feature-title').allTextContents()).not.toContain('Optical power');
+      await page.locator('#tool-filter').fill('xyzzy');
+      await expect.poll(() => page.getByRole('status').textContent()).toMatch(/No tool matches/);
+      for (const id of ['power', 'joint-loss', 'bend-loss', 'label-check']) {
+        await page.goto(`${server.url}#/${id}`);
+        await waitForScreen(page);
+      }
+      await page.goto(`${server.url}#/`);
+      await page.locator('#grp-recent').waitFor();
+      const recent = await page.locator('section[aria-labelledby="grp-recent"] .feature-title').allTextContents();
+      const title = (id: string) => FEATURES.find((f) => f.id === id)!.title;
+      expect(recent).toEqual([title('label-check'), title('bend-loss'), title('joint-loss')]);
+    } finally {
+      await context.close();
+    }
+  });
+});
+
 describe('signed fields across the screens', () => {
   it('more than one screen has a field that takes a negative value, and each was tried', () => {
     expect(signedFieldsTried).toBeGreaterThan(1);
