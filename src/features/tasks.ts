@@ -5,6 +5,7 @@ import { tasks as jointLossTasks } from './jointLoss/tasks';
 import { tasks as bendLossTasks } from './bendLoss/tasks';
 import { tasks as launchTasks } from './launch/tasks';
 import { tasks as dispersionTasks } from './dispersion/tasks';
+import { tasks as bendOrSpliceTasks } from './bendOrSplice/tasks';
 
 export type Task = (input: never) => unknown;
 
@@ -13,4 +14,5 @@ export const TASKS: Record<string, Task> = {
   ...bendLossTasks,
   ...launchTasks,
   ...dispersionTasks,
+  ...bendOrSpliceTasks,
 };
