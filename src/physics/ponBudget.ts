@@ -373,8 +373,15 @@ function directions(c: Checked, lossClass: PonLossClass, feederKm: number, split
   });
 }
 
-function worstMargin(ds: DirectionCheck[]): number {
-  return Math.min(...ds.map((d) => Math.min(d.marginDb, d.overloadMarginDb)));
+/** Highest loss of 1 km of feeder at a wavelength under the rule set (its cable maxima may raise the fiber's value). */
+function feederLossPerKm(c: Checked, wavelengthNm: number, dbPerKm: number): number {
+  const b = linkBudget({
+    elements: [{ kind: 'fiber', label: 'Feeder fiber', lengthKm: 1, fiberClass: 'single-mode', plant: 'outside', attenuationDbPerKm: [{ wavelengthNm, dbPerKm }] }],
+    wavelengthsNm: [wavelengthNm],
+    ruleSet: c.ruleSet,
+    designMarginDb: 0,
+  });
+  return b.wavelengths[0]!.maxDb;
 }
 
 function directionName(d: DirectionCheck): string {
@@ -400,33 +407,35 @@ export function ponBudget(input: PonPlanInput): PonPlanResult {
   else if (verdict === 'overload') headline = `Nearest home too close for ${cls}: ${fmt(-worstOverload!.overloadMarginDb)} dB below the ${fmt(lossClass.minDb)} dB minimum`;
   else headline = `Does not fit ${cls}: ${fmt(-tightest.marginDb)} dB too much loss (${directionName(tightest)})`;
 
+  // Losses do not depend on the class: every class of the generation is judged on the same directions.
   const classFits: ClassFit[] = PON_LOSS_CLASSES.filter((k) => k.generation === c.generation).map((k) => {
-    const kd = directions(c, k, c.feederKm, c.splitters);
-    const w = worstMargin(kd);
+    const w = Math.min(...ds.map((d) => Math.min(k.maxDb - d.maxLossDb, d.minLossDb - k.minDb)));
     return { lossClass: k, fits: w >= 0, worstMarginDb: w };
   });
 
   // Loss is linear in the feeder length (each km adds the attenuation at each wavelength), so the longest feeder
-  // that fits is (class maximum − loss without feeder) / attenuation, the smallest over the wavelengths.
-  const at0 = directions(c, lossClass, 0, c.splitters);
-  const at1 = directions(c, lossClass, 1, c.splitters);
+  // that fits is (class maximum − loss without feeder) / loss per km, the smallest over the wavelengths.
   let longestFeederKm: number | undefined = MAX_PON_FIBER_KM;
-  at0.forEach((d0, i) => {
-    const perKm = at1[i]!.maxLossDb - d0.maxLossDb;
-    const room = lossClass.maxDb - d0.maxLossDb;
-    if (room < 0) longestFeederKm = undefined;
-    else if (longestFeederKm !== undefined && perKm > 0) longestFeederKm = Math.min(longestFeederKm, room / perKm);
-  });
+  for (const d of ds) {
+    const feeder = d.farthest.elements[0]!;
+    const perKm = c.feederKm > 0 ? feeder.maxDb / c.feederKm : feederLossPerKm(c, d.wavelengthNm, d.attenuation.dbPerKm);
+    const room = lossClass.maxDb - (d.maxLossDb - feeder.maxDb);
+    if (room < 0) {
+      longestFeederKm = undefined;
+      break;
+    }
+    if (perKm > 0) longestFeederKm = Math.min(longestFeederKm, room / perKm);
+  }
 
-  // Largest split: the last (home-side) stage through the typical table, every other element unchanged.
+  // Largest split: the last (home-side) stage through the typical table, every other element unchanged. Stages are
+  // fixed losses in series, so the loss with another last stage is the loss minus the old stage plus the new one.
   let largestSplit: number | undefined;
-  const head = c.splitters.slice(0, -1);
-  const headWays = head.reduce((p, s) => p * s.ways, 1);
+  const last = c.splitters[c.splitters.length - 1]!;
+  const headWays = c.splitters.slice(0, -1).reduce((p, s) => p * s.ways, 1);
   for (const t of TYPICAL_SPLITTERS) {
     if (headWays * t.ways > MAX_TOTAL_SPLIT) break;
-    const trial = [...head, splitterLoss({ ways: t.ways })];
-    const td = directions(c, lossClass, c.feederKm, trial);
-    if (td.every((d) => d.marginDb >= 0)) largestSplit = headWays * t.ways;
+    const swap = splitterLoss({ ways: t.ways }).maxDb - last.maxDb;
+    if (ds.every((d) => lossClass.maxDb - (d.maxLossDb + swap) >= 0)) largestSplit = headWays * t.ways;
   }
 
   const differentialDb = Math.max(...ds.map((d) => d.farthest.typicalDb - d.nearest.typicalDb));
