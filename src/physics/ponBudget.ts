@@ -418,7 +418,8 @@ export function ponBudget(input: PonPlanInput): PonPlanResult {
   let longestFeederKm: number | undefined = MAX_PON_FIBER_KM;
   for (const d of ds) {
     const feeder = d.farthest.elements[0]!;
-    const perKm = c.feederKm > 0 ? feeder.maxDb / c.feederKm : feederLossPerKm(c, d.wavelengthNm, d.attenuation.dbPerKm);
+    // Per km from a 1 km budget, not feeder loss / length: a tiny typed length would lose the ratio to rounding.
+    const perKm = feederLossPerKm(c, d.wavelengthNm, d.attenuation.dbPerKm);
     const room = lossClass.maxDb - (d.maxLossDb - feeder.maxDb);
     if (room < 0) {
       longestFeederKm = undefined;
