@@ -1,11 +1,12 @@
 import { lazy, Suspense } from 'preact/compat';
-import { useEffect, useMemo, useRef } from 'preact/hooks';
-import { FEATURES, findFeature, GROUP_TITLES, type FeatureGroup } from '../features/registry';
+import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
+import { FEATURES, findFeature, GROUP_ORDER, GROUP_TITLES, type FeatureEntry } from '../features/registry';
 import { hrefFor, useRoute } from './route';
 import { SafetyReminder } from '../ui/SafetyNotice';
 import { ThemeSwitch } from '../ui/ThemeSwitch';
 import { APP_BUILD, APP_VERSION } from './version';
 import { UpdatePrompt } from '../pwa/UpdatePrompt';
+import { matchesFilter, readRecent, rememberUse } from './recent';
 
 const screens = new Map(FEATURES.map((f) => [f.id, lazy(f.load)]));
 
@@ -16,13 +17,16 @@ export function App() {
   const main = useRef<HTMLElement>(null);
   useEffect(() => {
     document.title = feature ? `${feature.title} — Modewright` : 'Modewright — fiber field calculator';
+    if (feature) rememberUse(feature.id);
     main.current?.focus({ preventScroll: true });
   }, [feature]);
   return (
     <div class="frame">
       <header class="topbar">
-        <a class="brand" href={hrefFor('')}>Modewright</a>
-        {feature ? <span class="topbar-title">{feature.title}</span> : <span class="spacer" />}
+        <a class="brand" href={hrefFor('')} aria-label="Modewright: all tools">
+          Modewright
+        </a>
+        <span class="spacer" />
         <ThemeSwitch />
       </header>
       <SafetyReminder />
@@ -44,28 +48,45 @@ export function App() {
   );
 }
 
+function FeatureLink({ f }: { f: FeatureEntry }) {
+  return (
+    <li>
+      <a class="feature-link" href={hrefFor(f.id)}>
+        <span class="feature-title">{f.title}</span>
+        <span class="feature-summary">{f.summary}</span>
+      </a>
+    </li>
+  );
+}
+
+/** Home: the last tools used on top, a filter that finds a tool by any word, then the tools by situation. */
 function Home({ unknown }: { unknown?: string }) {
-  const groups = useMemo(() => {
-    const m = new Map<FeatureGroup, typeof FEATURES>();
-    for (const f of FEATURES) m.set(f.group, [...(m.get(f.group) ?? []), f]);
-    return [...m.entries()];
-  }, []);
+  const [filter, setFilter] = useState('');
+  const recent = useMemo(() => readRecent().map(findFeature).filter((f): f is FeatureEntry => f !== undefined), []);
+  const shown = useMemo(() => FEATURES.filter((f) => matchesFilter(f, filter)), [filter]);
+  const groups = GROUP_ORDER.map((g) => [g, shown.filter((f) => f.group === g)] as const).filter(([, list]) => list.length > 0);
   return (
     <div class="home">
       <h1 class="screen-title">Field calculator</h1>
       {unknown && <p role="alert">There is no screen called “{unknown}”. Pick one below.</p>}
+      <div class="field home-filter">
+        <label for="tool-filter">Find a tool</label>
+        <input id="tool-filter" type="search" inputMode="search" autoComplete="off" placeholder="splice, budget, PON…" value={filter} onInput={(e) => setFilter((e.currentTarget as HTMLInputElement).value)} />
+      </div>
+      {filter.trim() === '' && recent.length > 0 && (
+        <section aria-labelledby="grp-recent">
+          <h2 id="grp-recent">Used last</h2>
+          <ul class="feature-list">
+            {recent.map((f) => <FeatureLink key={f.id} f={f} />)}
+          </ul>
+        </section>
+      )}
+      {groups.length === 0 && <p role="status">No tool matches “{filter.trim()}”. Try another word, such as loss, splice or budget.</p>}
       {groups.map(([g, list]) => (
         <section key={g} aria-labelledby={`grp-${g}`}>
           <h2 id={`grp-${g}`}>{GROUP_TITLES[g]}</h2>
           <ul class="feature-list">
-            {list.map((f) => (
-              <li key={f.id}>
-                <a class="feature-link" href={hrefFor(f.id)}>
-                  <span class="feature-title">{f.title}</span>
-                  <span class="feature-summary">{f.summary}</span>
-                </a>
-              </li>
-            ))}
+            {list.map((f) => <FeatureLink key={f.id} f={f} />)}
           </ul>
         </section>
       ))}

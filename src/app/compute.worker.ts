@@ -2,6 +2,7 @@
 // It holds no state and no app logic beyond dispatch; see src/features/tasks.ts.
 import { TASKS } from '../features/tasks';
 import { CalcError, InputError } from '../physics/errors';
+import { errorText } from '../ui/errorText';
 import type { WorkerReply, WorkerRequest } from './workerProtocol';
 
 self.onmessage = (ev: MessageEvent<WorkerRequest>) => {
@@ -16,7 +17,8 @@ self.onmessage = (ev: MessageEvent<WorkerRequest>) => {
     reply({ id, ok: true, result: fn(input) });
   } catch (e) {
     if (e instanceof CalcError) {
-      reply({ id, ok: false, message: e.message, argument: e instanceof InputError ? e.argument : undefined });
+      const fault = e instanceof InputError ? { argument: e.argument, allowed: e.allowed, hint: e.hint } : {};
+      reply({ id, ok: false, message: errorText(e), ...fault });
     } else {
       reply({ id, ok: false, message: String(e instanceof Error ? e.message : e), defect: true });
     }

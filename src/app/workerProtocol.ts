@@ -6,4 +6,4 @@ export interface WorkerRequest {
 
 export type WorkerReply =
   | { id: number; ok: true; result: unknown }
-  | { id: number; ok: false; message: string; argument?: string; defect?: boolean };
+  | { id: number; ok: false; message: string; argument?: string; allowed?: string; hint?: string; defect?: boolean };

@@ -12,6 +12,8 @@ export interface FeatureEntry {
   /** One line on the home screen: the question it answers. */
   summary: string;
   group: FeatureGroup;
+  /** Extra words the home filter finds the tool by (trade synonyms), space-separated. */
+  keywords?: string;
   load: () => Promise<{ default: ComponentType }>;
 }
 
@@ -22,6 +24,9 @@ export const GROUP_TITLES: Record<FeatureGroup, string> = {
   teaching: 'Explaining to a class',
   library: 'My fiber types',
 };
+
+/** Home-screen order of the groups. */
+export const GROUP_ORDER: readonly FeatureGroup[] = ['splice-tray', 'patch-panel', 'planning', 'teaching', 'library'];
 
 export const FEATURES: FeatureEntry[] = [
   { id: 'single-mode', group: 'teaching', title: 'Single-mode check', summary: 'Is this fiber single-mode at this wavelength? V-number and guided LP modes.', load: () => import('./singleMode/Screen') },

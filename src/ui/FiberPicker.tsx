@@ -6,7 +6,7 @@ import { useEffect, useMemo, useState } from 'preact/hooks';
 import { NumberField } from './NumberField';
 import { useQuantity } from './useQuantity';
 import { errorText } from './errorText';
-import { formatNumber } from './format';
+import { formatNumber, formatQuantity } from './format';
 import { presetsOfKinds, findPreset, type FiberKind } from '../fibers/presets';
 import { kindOfSaved, resolveLabel, resolvePreset, resolveSaved, resolveTyped } from '../fibers/resolve';
 import type { ResolvedFiber } from '../fibers/resolved';
@@ -20,6 +20,10 @@ export interface FiberPickerOptions {
   label: string;
   kinds: FiberKind[];
   defaultCategory: string;
+  /** A short name for the one-line summary once chosen ("Sending"); the label if not given. */
+  shortLabel?: string;
+  /** Where the fiber comes from on first use (before the person chooses); a standard category if not given. */
+  defaultSource?: Source;
 }
 
 export interface FiberPickerState {
@@ -28,7 +32,7 @@ export interface FiberPickerState {
   element: JSX.Element;
 }
 
-type Source = 'category' | 'saved' | 'typed' | 'label';
+export type Source = 'category' | 'saved' | 'typed' | 'label';
 
 /** What is remembered per picker id. Texts are kept as typed so a reload shows the same field. */
 interface PickerMemory {
@@ -98,7 +102,7 @@ export function useSavedFiberTypes(): { types: FiberType[] | undefined; error: s
 }
 
 export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
-  const { id, label, kinds, defaultCategory } = opts;
+  const { id, label, kinds, defaultCategory, defaultSource = 'category', shortLabel = label } = opts;
   const presets = useMemo(() => presetsOfKinds(kinds), [kinds.join(',')]);
   const allowsSingleMode = kinds.includes('single-mode');
   const mmOnly = !allowsSingleMode;
@@ -109,8 +113,12 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
   const [source, setSource] = useState<Source>(
     rememberedSource === 'typed' || rememberedSource === 'category' || rememberedSource === 'saved' || (rememberedSource === 'label' && allowsSingleMode)
       ? rememberedSource
-      : 'category',
+      : defaultSource === 'label' && !allowsSingleMode
+        ? 'category'
+        : defaultSource,
   );
+  /** Open while the person is choosing; folded to one line once a fiber is chosen. Undefined: not toggled by hand. */
+  const [openByHand, setOpenByHand] = useState<boolean | undefined>(undefined);
   const [category, setCategory] = useState<string>(
     validCategory(memory.category) ? memory.category! : validCategory(defaultCategory) ? defaultCategory : presets[0]?.category ?? '',
   );
@@ -178,9 +186,23 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
   }, [saved.types, saved.error, savedId, source, category, profile, core.value, core.error, na.value, na.error, alpha.value, alpha.error, cutoff.value, cutoff.error, cutoffKind, mfd.value, mfd.error, mfdWl.value, mfdWl.error, id]);
 
   const selId = `${id}-source`;
+  const open = openByHand ?? !resolved.fiber;
   const element = (
-    <fieldset class="fiber-picker">
-      <legend>{label}</legend>
+    <details
+      class="fiber-picker"
+      open={open}
+      onToggle={(e) => {
+        const now = (e.currentTarget as HTMLDetailsElement).open;
+        if (now !== open) setOpenByHand(now);
+      }}
+    >
+      <summary class="picker-summary" aria-label={`${label}: ${resolved.fiber ? resolved.fiber.name : 'not chosen yet'}. ${open ? 'Fold' : 'Change'}`}>
+        <span class="picker-line">
+          <strong>{shortLabel}:</strong> <span class="user-text">{resolved.fiber ? resolved.fiber.name : 'not chosen yet'}</span>
+        </span>
+        <span class="picker-change" aria-hidden="true">{open ? 'Done' : 'Change'}</span>
+      </summary>
+      <div class="picker-body" role="group" aria-label={label}>
       <div class="field">
         <label for={selId}>Fiber from</label>
         <select id={selId} value={source} onChange={(e) => setSource((e.currentTarget as HTMLSelectElement).value as Source)}>
@@ -249,7 +271,8 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
           {resolved.error}
         </p>
       )}
-    </fieldset>
+      </div>
+    </details>
   );
   return { fiber: resolved.fiber, error: resolved.error, element };
 }
@@ -260,8 +283,8 @@ export function FiberSummary({ fiber }: { fiber: ResolvedFiber }) {
   return (
     <div class="note fiber-summary">
       <p>
-        Uses: core diameter {formatNumber(fiber.coreRadiusUm * 2)} µm, NA {formatNumber(fiber.na)}, {profile}, cladding{' '}
-        {formatNumber(fiber.claddingDiameterUm)} µm.
+        Uses: core diameter <span class="num">{formatQuantity(fiber.coreRadiusUm * 2, 'µm')}</span>, NA <span class="num">{formatNumber(fiber.na)}</span>,{' '}
+        {profile}, cladding <span class="num">{formatQuantity(fiber.claddingDiameterUm, 'µm')}</span>.
       </p>
       {fiber.notes.length > 0 && (
         // Folded: on a phone the derivation would push the inputs below the fold; trainers open it.

@@ -3,7 +3,8 @@ import { useEffect, useState } from 'preact/hooks';
 type ThemeChoice = 'system' | 'light' | 'dark';
 const KEY = 'modewright.theme';
 const NEXT: Record<ThemeChoice, ThemeChoice> = { system: 'light', light: 'dark', dark: 'system' };
-const LABEL: Record<ThemeChoice, string> = { system: 'Theme: as system', light: 'Theme: daylight', dark: 'Theme: dark' };
+const LABEL: Record<ThemeChoice, string> = { system: 'Theme: auto', light: 'Theme: day', dark: 'Theme: dark' };
+const SPOKEN: Record<ThemeChoice, string> = { system: 'Theme: as the system', light: 'Theme: daylight', dark: 'Theme: dark' };
 
 function readChoice(): ThemeChoice {
   try {
@@ -28,7 +29,7 @@ export function ThemeSwitch() {
     }
   }, [choice]);
   return (
-    <button type="button" class="theme-switch" onClick={() => setChoice(NEXT[choice])} aria-label={`${LABEL[choice]}. Change theme`}>
+    <button type="button" class="theme-switch" onClick={() => setChoice(NEXT[choice])} aria-label={`${SPOKEN[choice]}. Change theme`}>
       {LABEL[choice]}
     </button>
   );

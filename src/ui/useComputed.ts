@@ -30,7 +30,7 @@ export function useComputed<I, R>(task: string, input: I | undefined, inputError
 
   useEffect(() => {
     if (key === undefined || inputError) {
-      setState((s) => ({ ...s, error: inputError ?? s.error, errorArgument: undefined, stale: s.result !== undefined, busy: false }));
+      setState((s) => ({ ...s, error: inputError ?? s.error, errorArgument: undefined, fault: undefined, stale: s.result !== undefined, busy: false }));
       return;
     }
     const id = ++seq.current;
@@ -57,7 +57,8 @@ export function useComputed<I, R>(task: string, input: I | undefined, inputError
         setState({ result: msg.result as R, error: undefined, errorArgument: undefined, stale: false, busy: false });
       } else {
         if (msg.defect) console.error(`worker task ${task}: ${msg.message}`);
-        setState((s) => ({ result: s.result, error: msg.defect ? DEFECT_TEXT : msg.message, errorArgument: msg.argument, stale: s.result !== undefined, busy: false }));
+        const fault = msg.argument !== undefined && msg.allowed !== undefined ? { argument: msg.argument, allowed: msg.allowed, hint: msg.hint } : undefined;
+        setState((s) => ({ result: s.result, error: msg.defect ? DEFECT_TEXT : msg.message, errorArgument: msg.argument, fault, stale: s.result !== undefined, busy: false }));
       }
     };
     w.onerror = (ev) => {

@@ -1,6 +1,7 @@
 import { useMemo, useState } from 'preact/hooks';
 import { InputError } from '../physics/errors';
 import { parseQuantity, type QuantityKind } from '../physics/units';
+import { SEE_MARKED_FIELD } from './useResult';
 
 export interface QuantityState {
   /** The text as typed. */
@@ -8,7 +9,10 @@ export interface QuantityState {
   setText: (t: string) => void;
   /** The parsed value in the kind's base unit (nm, km, mm, µm, dBm, plain), or undefined when it does not parse. */
   value: number | undefined;
-  /** Plain-words reason the text does not parse; undefined when it does. */
+  /**
+   * Set when the text does not parse: a pointer to the field, for a headline or a card. The field
+   * itself says what is wrong with its own label and unit (NumberField's parseErrorText).
+   */
   error: string | undefined;
   /** Conversion note, e.g. "1.55 µm = 1550 nm". */
   conversion: string;
@@ -37,14 +41,10 @@ export function useQuantity(argument: string, kind: QuantityKind, initialText: s
     value: parsed.value,
     conversion: parsed.conversion,
     failure: parsed.failure,
-    error: parsed.failure ? fieldMessage(parsed.failure) : undefined,
+    error: parsed.failure ? SEE_MARKED_FIELD : undefined,
     argument,
     kind,
   };
-}
-
-function fieldMessage(e: InputError): string {
-  return `Expected ${e.allowed}${e.hint ? `: ${e.hint}` : ''}.`;
 }
 
 /** The field's value, or its parse error thrown — for use inside a useResult computation. */

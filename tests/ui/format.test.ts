@@ -12,7 +12,7 @@ describe('numbers on screen', () => {
   it.each([
     [1550, 4, '1550'],
     [2.40482, 4, '2.405'],
-    [0.000123, 3, '1.23 × 10^-4'],
+    [0.000123, 3, '1.23\u00a0×\u00a010^-4'],
     [8.6123, 3, '8.61'],
   ])('%s to %s significant digits reads %s', (v, sig, expected) => {
     expect(formatNumber(v, sig)).toBe(expected);

@@ -1,15 +1,17 @@
 // Joint loss between two single-mode fibers: each imperfection, the total, which one dominates,
-// and the exact LP01 overlap beside the Gaussian formulas.
+// and the exact LP01 overlap beside the Gaussian formulas. The worked example of the calculator
+// frame (src/ui/CalcScreen.tsx): inputs, one headline answer, details below.
 import { useState } from 'preact/hooks';
 import { NumberField } from '../../ui/NumberField';
 import { need, useQuantity, shownValue } from '../../ui/useQuantity';
-import { useResult } from '../../ui/useResult';
+import { cardError, useResult } from '../../ui/useResult';
 import { useComputed } from '../../ui/useComputed';
 import { ResultCard } from '../../ui/ResultCard';
-import { HowComputed } from '../../ui/HowComputed';
+import { CalcScreen, ShortProse, type Headline } from '../../ui/CalcScreen';
+import { DataTable } from '../../ui/DataTable';
 import { LinePlot } from '../../ui/Plot';
-import { formatDb, formatNumber } from '../../ui/format';
-import { reportText } from '../../ui/copyText';
+import { formatDb, formatNumber, formatQuantity } from '../../ui/format';
+import type { ReportSpec } from '../../ui/copyText';
 import { useFiberPicker } from '../../ui/FiberPicker';
 import type { ResolvedFiber } from '../../fibers/resolved';
 import {
@@ -42,11 +44,12 @@ function fiberOrThrow(f: ResolvedFiber | undefined, argument: string, error: str
 }
 
 export default function Screen() {
-  const pick1 = useFiberPicker({ id: 'joint-1', label: 'Fiber sending the light', kinds: ['single-mode'], defaultCategory: 'G.652.D' });
-  const pick2 = useFiberPicker({ id: 'joint-2', label: 'Fiber receiving the light', kinds: ['single-mode'], defaultCategory: 'G.657.A1' });
+  const pick1 = useFiberPicker({ id: 'joint-1', label: 'Fiber sending the light', shortLabel: 'Sending', kinds: ['single-mode'], defaultCategory: 'G.652.D' });
+  const pick2 = useFiberPicker({ id: 'joint-2', label: 'Fiber receiving the light', shortLabel: 'Receiving', kinds: ['single-mode'], defaultCategory: 'G.657.A1' });
   const wavelength = useQuantity('wavelengthNm', 'wavelength', '1550');
-  const offset = useQuantity('lateralOffsetUm', 'size', '1');
-  const tilt = useQuantity('tiltDeg', 'plain', '0.3');
+  // Neutral defaults: a perfect joint until the person adds an imperfection (or taps the example).
+  const offset = useQuantity('lateralOffsetUm', 'size', '0');
+  const tilt = useQuantity('tiltDeg', 'plain', '0');
   const gap = useQuantity('gapUm', 'size', '0');
   const [medium, setMedium] = useState<GapMedium>('air');
   const mediumIndex = medium === 'air' ? INDEX_AIR : INDEX_MATCHING_GEL;
@@ -69,7 +72,6 @@ export default function Screen() {
     });
     return { mfd1Um, mfd2Um, joint, fresnel: fresnelLoss(SILICA_INDEX_1550NM, mediumIndex) };
   }, [pick1.fiber, pick1.error, pick2.fiber, pick2.error, wavelength.value, wavelength.failure, offset.value, offset.failure, tilt.value, tilt.failure, gap.value, gap.failure, mediumIndex]);
-  const calc = { error: gauss.error, errorArgument: gauss.errorArgument };
 
   const exactInput: JointExactInput | undefined =
     pick1.fiber && pick2.fiber && wavelength.value !== undefined && offset.value !== undefined
@@ -84,119 +86,129 @@ export default function Screen() {
 
   const g = gauss.result;
   const x = exact.result;
-  const copy =
-    g &&
-    reportText({
-      title: 'Joint loss between two single-mode fibers',
-      inputs: [
-        ['Fiber sending', pick1.fiber?.name ?? ''],
-        ['Fiber receiving', pick2.fiber?.name ?? ''],
-        ['Wavelength', shownValue(wavelength, 'nm')],
-        ['Lateral offset', shownValue(offset, 'µm')],
-        ['Angle', shownValue(tilt, '°')],
-        ['End gap', `${shownValue(gap, 'µm')}, ${medium === 'air' ? 'air' : 'index-matching gel'}`],
-      ],
-      outputs: [
-        ['Total loss (Gaussian fields)', formatDb(g.joint.totalLossDb, 3)],
-        ...CAUSE_ORDER.map((c): [string, string] => [CAUSE_WORDS[c], formatDb(g.joint.contributions[c], 3)]),
-        ['Largest cause', g.joint.dominant === 'none' ? 'none (all below 0.001 dB)' : CAUSE_WORDS[g.joint.dominant]],
-        ...(x && !exact.stale ? [['Mismatch + offset, exact LP01 fields', formatDb(x.exactLossDb, 3)] as [string, string]] : []),
-      ],
-      assumptions: [
-        'Gaussian mode fields with the Petermann II MFD at this wavelength (Marcuse 1977).',
-        'Fresnel loss of an air gap: two faces, reflections not re-added; an etalon can swing it.',
-      ],
-    });
+  const fieldArgs = [wavelength.argument, offset.argument, tilt.argument, gap.argument];
+
+  const headline: Headline | undefined = g && {
+    label: 'Joint loss',
+    value: formatDb(g.joint.totalLossDb, 3),
+    verdict: g.joint.dominant === 'none' ? 'Every cause is below 0.001 dB' : `Mostly ${CAUSE_WORDS[g.joint.dominant].toLowerCase()}`,
+    tone: 'info',
+  };
+
+  const report: ReportSpec | undefined = g && {
+    title: 'Joint loss between two single-mode fibers',
+    inputs: [
+      ['Fiber sending', pick1.fiber?.name ?? ''],
+      ['Fiber receiving', pick2.fiber?.name ?? ''],
+      ['Wavelength', shownValue(wavelength, 'nm')],
+      ['Lateral offset', shownValue(offset, 'µm')],
+      ['Angle', shownValue(tilt, '°')],
+      ['End gap', `${shownValue(gap, 'µm')}, ${medium === 'air' ? 'air' : 'index-matching gel'}`],
+    ],
+    outputs: [
+      ['Total loss (Gaussian fields)', formatDb(g.joint.totalLossDb, 3)],
+      ...CAUSE_ORDER.map((c): [string, string] => [CAUSE_WORDS[c], formatDb(g.joint.contributions[c], 3)]),
+      ['Largest cause', g.joint.dominant === 'none' ? 'none (all below 0.001 dB)' : CAUSE_WORDS[g.joint.dominant]],
+      ...(x && !exact.stale ? [['Mismatch + offset, exact LP01 fields', formatDb(x.exactLossDb, 3)] as [string, string]] : []),
+    ],
+    assumptions: [
+      'Gaussian mode fields with the Petermann II MFD at this wavelength (Marcuse 1977).',
+      'Fresnel loss of an air gap: two faces, reflections not re-added; an etalon can swing it.',
+    ],
+  };
+
+  const tryExample = () => {
+    offset.setText('1');
+    tilt.setText('0.3');
+  };
 
   return (
-    <>
-      <h2>The two fibers and the joint</h2>
-      {pick1.element}
-      {pick2.element}
-      <div class="form">
-        <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={[1310, 1550, 1625]} calc={calc} />
-        <NumberField q={offset} label="Lateral offset of the cores" unit="µm" quickPicks={[0, 0.5, 1, 2]} calc={calc} />
-        <NumberField q={tilt} label="Angle between the fibers" unit="°" quickPicks={[0, 0.5, 1]} calc={calc} />
-        <NumberField q={gap} label="End gap" unit="µm" quickPicks={[0, 5, 20]} calc={calc} help="0 for a fusion splice or a physical-contact connector." />
-        <div class="field">
-          <label for="joint-medium">The gap is filled with</label>
-          <select id="joint-medium" value={medium} onChange={(e) => setMedium((e.currentTarget as HTMLSelectElement).value as GapMedium)}>
-            <option value="air">Air (n = 1.0)</option>
-            <option value="gel">Index-matching gel (n ≈ 1.46)</option>
-          </select>
-        </div>
-      </div>
-
-      <ResultCard title="Joint loss" stale={gauss.stale} error={gauss.error} copyText={copy}>
-        {g && (
-          <>
-            <dl class="kv">
-              <dt>Total loss</dt>
-              <dd>
-                <strong>{formatDb(g.joint.totalLossDb, 3)}</strong>
-              </dd>
-              <dt>Largest cause</dt>
-              <dd>{g.joint.dominant === 'none' ? 'None: every cause is below 0.001 dB' : CAUSE_WORDS[g.joint.dominant]}</dd>
-              <dt>Mode field diameters at this wavelength</dt>
-              <dd>
-                {formatNumber(g.mfd1Um, 3)} µm → {formatNumber(g.mfd2Um, 3)} µm
-              </dd>
-            </dl>
-            <div class="table-wrap">
-              <table>
-                <caption>Each cause alone (the others set to zero)</caption>
-                <thead>
-                  <tr>
-                    <th scope="col">Cause</th>
-                    <th scope="col">Loss</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {CAUSE_ORDER.map((c) => (
-                    <tr key={c}>
-                      <th scope="row">
-                        {CAUSE_WORDS[c]}
-                        {c === g.joint.dominant ? ' (largest)' : ''}
-                      </th>
-                      <td>{formatDb(g.joint.contributions[c], 3)}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
+    <CalcScreen
+      headline={headline}
+      status={{ stale: gauss.stale, error: cardError(gauss, fieldArgs) }}
+      report={report}
+      inputsTitle="The two fibers and the joint"
+      inputs={
+        <>
+          {pick1.element}
+          {pick2.element}
+          <div class="form">
+            <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={[1310, 1550, 1625]} calc={gauss} />
+            <NumberField q={offset} label="Lateral offset of the cores" unit="µm" quickPicks={[0, 0.5, 1, 2]} calc={gauss} />
+            <NumberField q={tilt} label="Angle between the fibers" unit="°" quickPicks={[0, 0.5, 1]} calc={gauss} />
+            <NumberField q={gap} label="End gap" unit="µm" quickPicks={[0, 5, 20]} calc={gauss} help="0 for a fusion splice or a physical-contact connector." />
+            <div class="field">
+              <label for="joint-medium">A gap is filled with</label>
+              <select id="joint-medium" value={medium} onChange={(e) => setMedium((e.currentTarget as HTMLSelectElement).value as GapMedium)}>
+                <option value="air">Air (n = 1.0)</option>
+                <option value="gel">Index-matching gel (n ≈ 1.46)</option>
+              </select>
             </div>
-            {Math.abs(g.joint.sumOfSeparateDb - g.joint.totalLossDb) > 0.005 && (
-              <p class="note">
-                The causes interact (offset and angle across a gap): the total differs from their sum, {formatDb(g.joint.sumOfSeparateDb, 3)}.
-              </p>
-            )}
-            {(gap.value ?? 0) > 0 && medium === 'air' && (
-              <p class="note">
-                Air gap: each glass face reflects {formatNumber(g.fresnel.reflectancePerSurface * 100, 3)} % of the light. With a laser and a very
-                stable gap the two faces act as an etalon and the loss can swing between {formatDb(g.fresnel.etalonMinLossDb)} and{' '}
-                {formatDb(g.fresnel.etalonMaxLossDb)} as the gap changes by a quarter wavelength. Reflected light also goes back towards the source.
-              </p>
-            )}
-          </>
-        )}
-      </ResultCard>
+          </div>
+          <p>
+            <button type="button" onClick={tryExample}>
+              Example: a worn connector (1 µm offset, 0.3°)
+            </button>
+          </p>
+        </>
+      }
+      how={{
+        formula:
+          'Overlap of the two mode fields. Gaussian fields (spot radius w = MFD/2): mismatch (2w₁w₂/(w₁²+w₂²))², offset exp(−2d²/(w₁²+w₂²)), angle exp(−k²θ²w₁²w₂²/(2(w₁²+w₂²))) with k in the glass when the faces touch and in the gap medium across a gap, gap 1/(1+(λs/(πn(w₁²+w₂²)))²); all at once by the closed-form Gaussian overlap. Exact: numerical overlap of the LP01 fields J₀/K₀.',
+        source: 'Marcuse 1977, BSTJ 56(5); Nemoto & Makimoto 1979; Kogelnik & Li 1966; Fresnel reflection, Born & Wolf 1999',
+        assumptions: [
+          'Both fibers single-mode at the wavelength; fields from the (equivalent) step-index fiber of each choice.',
+          'MFD by Petermann II at the wavelength.',
+          `Fresnel loss with a fiber index of ${SILICA_INDEX_1550NM} (fused silica at 1550 nm); two faces, reflections not re-added.`,
+          'The exact comparison covers mismatch and offset; angle and gap use the Gaussian beam only.',
+        ],
+        validity: 'Small angles (a few degrees at most), paraxial gaps; weakly guiding fibers.',
+      }}
+    >
+      {g && (
+        <ResultCard title="Each cause" stale={gauss.stale}>
+          <dl class="kv">
+            <dt>Mode field diameters here</dt>
+            <dd>
+              <span class="num">{formatQuantity(g.mfd1Um, 'µm', 3)}</span> → <span class="num">{formatQuantity(g.mfd2Um, 'µm', 3)}</span>
+            </dd>
+          </dl>
+          <DataTable
+            caption="Each cause alone (the others set to zero)"
+            rows={CAUSE_ORDER}
+            rowKey={(c) => c}
+            columns={[
+              { label: 'Cause', cell: (c) => `${CAUSE_WORDS[c]}${c === g.joint.dominant ? ' (largest)' : ''}` },
+              { label: 'Loss', cell: (c) => formatDb(g.joint.contributions[c], 3), num: true },
+            ]}
+          />
+          {Math.abs(g.joint.sumOfSeparateDb - g.joint.totalLossDb) > 0.005 && (
+            <p class="note">
+              The causes interact (offset and angle across a gap): the total differs from their sum, <span class="num">{formatDb(g.joint.sumOfSeparateDb, 3)}</span>.
+            </p>
+          )}
+          {(gap.value ?? 0) > 0 && medium === 'air' && (
+            <ShortProse
+              text={`Air gap: each glass face reflects ${formatNumber(g.fresnel.reflectancePerSurface * 100, 3)}\u00a0% of the light. Reflected light also goes back towards the source. With a laser and a very stable gap the two faces act as an etalon, and the loss can swing between ${formatDb(g.fresnel.etalonMinLossDb)} and ${formatDb(g.fresnel.etalonMaxLossDb)} as the gap changes by a quarter wavelength.`}
+            />
+          )}
+        </ResultCard>
+      )}
 
       <ResultCard title="Gaussian picture against the exact mode fields" stale={exact.stale} error={exact.error} busy={exact.busy}>
         {x && (
           <>
             <dl class="kv">
               <dt>Mismatch + offset, Gaussian fields</dt>
-              <dd>{formatDb(x.gaussianLossDb, 4)}</dd>
+              <dd class="num">{formatDb(x.gaussianLossDb, 4)}</dd>
               <dt>Mismatch + offset, exact LP01 fields</dt>
-              <dd>{formatDb(x.exactLossDb, 4)}</dd>
+              <dd class="num">{formatDb(x.exactLossDb, 4)}</dd>
               <dt>V-numbers</dt>
               <dd>
-                {formatNumber(x.v1, 3)} and {formatNumber(x.v2, 3)}
+                <span class="num">{formatNumber(x.v1, 3)}</span> and <span class="num">{formatNumber(x.v2, 3)}</span>
               </dd>
             </dl>
-            <p class="note">
-              Near V ≈ 2.2 the LP01 field is very close to a Gaussian and the two columns agree. At lower V the real field has a wider tail than
-              a Gaussian, and the Gaussian formulas start to misjudge large offsets.
-            </p>
+            <ShortProse text="Near V ≈ 2.2 the LP01 field is very close to a Gaussian and the two columns agree. At lower V the real field has a wider tail than a Gaussian, and the Gaussian formulas start to misjudge large offsets." />
             <LinePlot
               title="Loss versus lateral offset (mismatch included)"
               xLabel="Lateral offset (µm)"
@@ -221,18 +233,6 @@ export default function Screen() {
           </>
         )}
       </ResultCard>
-
-      <HowComputed
-        formula="Overlap of the two mode fields. Gaussian fields (spot radius w = MFD/2): mismatch (2w₁w₂/(w₁²+w₂²))², offset exp(−2d²/(w₁²+w₂²)), angle exp(−k²θ²w₁²w₂²/(2(w₁²+w₂²))), gap 1/(1+(λs/(πn(w₁²+w₂²)))²); all at once by the closed-form Gaussian overlap. Exact: numerical overlap of the LP01 fields J₀/K₀."
-        source="Marcuse 1977, BSTJ 56(5); Nemoto & Makimoto 1979; Kogelnik & Li 1966; Fresnel reflection, Born & Wolf 1999"
-        assumptions={[
-          'Both fibers single-mode at the wavelength; fields from the (equivalent) step-index fiber of each choice.',
-          'MFD by Petermann II at the wavelength.',
-          `Fresnel loss with a fiber index of ${SILICA_INDEX_1550NM} (fused silica at 1550 nm); two faces, reflections not re-added.`,
-          'The exact comparison covers mismatch and offset; angle and gap use the Gaussian beam only.',
-        ]}
-        validity="Small angles (a few degrees at most), paraxial gaps; weakly guiding fibers."
-      />
-    </>
+    </CalcScreen>
   );
 }
