@@ -289,7 +289,15 @@ function check(input: PonPlanInput): Checked {
   if (!Array.isArray(input.splitters) || input.splitters.length === 0 || input.splitters.length > MAX_SPLITTER_STAGES) {
     throw new InputError('splitters', input.splitters, `1 to ${MAX_SPLITTER_STAGES} splitter stages`);
   }
-  const splitters = input.splitters.map((s) => splitterLoss(s));
+  const splitters = input.splitters.map((s, i) => {
+    try {
+      return splitterLoss(s);
+    } catch (e) {
+      // Name the stage, so a screen can point at the field of the right stage.
+      if (e instanceof InputError) throw new InputError(`splitters[${i}].${e.argument}`, e.value, e.allowed, e.hint);
+      throw e;
+    }
+  });
   const totalSplit = splitters.reduce((p, s) => p * s.ways, 1);
   if (totalSplit > MAX_TOTAL_SPLIT) throw new InputError('splitters', totalSplit, `a total split of at most 1:${MAX_TOTAL_SPLIT}`);
   const connectorPairs = requireInteger('connectorPairs', input.connectorPairs, 0, 100);
