@@ -230,7 +230,7 @@ export default function Screen() {
             <div class="quick-picks" role="group" aria-label="CWDM channels in use">
               {cwdmChannels().map((x) => (
                 <button type="button" key={x.number} aria-pressed={inUse.includes(x.number)} onClick={() => toggleUse(x.number)}>
-                  {x.wavelengthNm}&nbsp;nm
+                  {x.number}: {x.wavelengthNm}&nbsp;nm
                 </button>
               ))}
             </div>
