@@ -305,7 +305,8 @@ export default function Screen() {
             columns={[
               { label: 'Class', cell: (f) => f.lossClass.name },
               { label: 'Range', cell: (f) => withUnit(`${f.lossClass.minDb}–${f.lossClass.maxDb}`, 'dB'), num: true },
-              { label: 'Fits', cell: (f) => (f.fits ? `yes, ${formatDb(f.worstMarginDb)} to spare` : `no, ${formatDb(-f.worstMarginDb)} short`), num: true },
+              { label: 'Fits', cell: (f) => (f.fits ? 'yes' : 'no') },
+              { label: 'Margin', cell: (f) => (f.fits ? `${formatDb(f.worstMarginDb)} to spare` : `${formatDb(-f.worstMarginDb)} short`), num: true },
             ]}
           />
           <p class="note">Class limits: {r.lossClass.source}.</p>
@@ -314,12 +315,13 @@ export default function Screen() {
       {r && (
         <ResultCard title={`Where the loss goes (${directionLabel(r.tightest)}, farthest home)`} stale={state.stale}>
           <DataTable
-            caption="Each element, highest value"
+            caption="Each element (lowest and highest to expect)"
             rows={r.tightest.farthest.elements}
             rowKey={(e) => e.index}
             columns={[
               { label: 'Element', cell: (e) => `${e.label}${r.costliest && e.index === r.costliest.index ? ' (costs most)' : ''}` },
-              { label: 'Loss', cell: (e) => formatDb(e.maxDb), num: true },
+              { label: 'Lowest', cell: (e) => formatDb(e.minDb), num: true },
+              { label: 'Highest', cell: (e) => formatDb(e.maxDb), num: true },
               { label: 'How', cell: (e) => e.basis },
             ]}
           />

@@ -279,7 +279,8 @@ export default function Screen() {
               rows={p.channels}
               rowKey={(x: CwdmChannelBudget) => x.channel.number}
               columns={[
-                { label: 'Channel', cell: (x) => `${x.channel.number}: ${x.channel.wavelengthNm}\u00a0nm${inUse.includes(x.channel.number) ? ' (in use)' : ''}` },
+                { label: 'Channel', cell: (x) => `${x.channel.number}: ${x.channel.wavelengthNm}\u00a0nm` },
+                { label: 'Use', cell: (x) => (inUse.includes(x.channel.number) ? 'in use' : 'free') },
                 { label: 'Fiber', cell: (x) => (x.attenuation ? `${withUnit(formatFixed(x.attenuation.dbPerKm, 3), 'dB/km')}${x.attenuation.waterPeakUnlisted ? ' ⚠ water peak' : ''}` : 'no estimate'), num: true },
                 { label: 'Loss', cell: (x) => (x.maxLossDb === undefined ? '—' : formatDb(x.maxLossDb)), num: true },
                 ...(withBudget ? [{ label: 'Margin', cell: (x: CwdmChannelBudget) => (x.marginDb === undefined ? '—' : formatDb(x.marginDb)), num: true }] : []),
