@@ -80,6 +80,8 @@ export const PON_WAVELENGTHS: Readonly<Record<PonGeneration, { downstreamNm: num
 
 /** A video overlay's downstream wavelength, 1550 nm (1550–1560 nm band of G.983.3, from memory; centre common practice). */
 export const VIDEO_OVERLAY_NM = 1550;
+/** Overlay wavelengths accepted: the C and L bands, where overlays sit (common practice). */
+export const VIDEO_OVERLAY_RANGE_NM = { min: 1530, max: 1625 } as const;
 
 /** Typical planar splitter data: the highest insertion loss of any output and the spread between outputs. */
 export interface SplitterTypical {
@@ -183,8 +185,10 @@ export interface PonPlanInput {
   reserveDb: number;
   /** The fiber type's listed attenuation. */
   attenuationDbPerKm: AttenuationAt[];
-  /** Add the video overlay's downstream wavelength (1550 nm) to the check. */
+  /** Add a video overlay's downstream wavelength to the check. */
   videoOverlay?: boolean;
+  /** The overlay's wavelength, nm; default 1550 nm (VIDEO_OVERLAY_NM). */
+  videoOverlayNm?: number;
   /** Connector and splice allowances; default: typical installed values (linkBudget.ts). */
   ruleSet?: LinkRuleSet;
 }
@@ -310,9 +314,13 @@ function check(input: PonPlanInput): Checked {
   }));
   const reserveDb = requireNumber('reserveDb', input.reserveDb, { min: 0, max: MAX_PON_ELEMENT_DB, unit: 'dB' });
   const wl = PON_WAVELENGTHS[input.generation];
+  const overlayNm =
+    input.videoOverlayNm === undefined
+      ? VIDEO_OVERLAY_NM
+      : requireNumber('videoOverlayNm', input.videoOverlayNm, { ...VIDEO_OVERLAY_RANGE_NM, unit: 'nm', hint: (v) => (v >= 1.53 && v <= 1.625 ? `did you mean ${v * 1000} nm?` : undefined) });
   const wavelengths: Checked['wavelengths'] = [
     { direction: 'downstream', wavelengthNm: wl.downstreamNm },
-    ...(input.videoOverlay ? [{ direction: 'downstream' as const, wavelengthNm: VIDEO_OVERLAY_NM }] : []),
+    ...(input.videoOverlay ? [{ direction: 'downstream' as const, wavelengthNm: overlayNm }] : []),
     { direction: 'upstream', wavelengthNm: wl.upstreamNm },
   ];
   const ruleSet = input.ruleSet ?? TYPICAL_VALUES;
@@ -464,7 +472,7 @@ export function ponBudget(input: PonPlanInput): PonPlanResult {
 
   const notes = [
     `Class ${lossClass.name} (${lossClass.generation}): ${fmt(lossClass.minDb)} to ${fmt(lossClass.maxDb)} dB — ${lossClass.source}.`,
-    `Wavelengths: ${PON_WAVELENGTHS[c.generation].source}${c.wavelengths.some((w) => w.wavelengthNm === VIDEO_OVERLAY_NM) ? `; video overlay ${VIDEO_OVERLAY_NM} nm` : ''}.`,
+    `Wavelengths: ${PON_WAVELENGTHS[c.generation].source}${c.wavelengths.length > 2 ? `; video overlay ${c.wavelengths[1]!.wavelengthNm} nm` : ''}.`,
     ...c.splitters.map((s) => `Splitter ${s.basis}.`),
     ...ds.map((d) => `Fiber at ${d.wavelengthNm} nm: ${fmt(d.attenuation.dbPerKm)} dB/km, ${d.attenuation.how}.`),
     `Connectors and splices: ${c.ruleSet.connectorPairSource}; ${c.ruleSet.spliceSource}.`,

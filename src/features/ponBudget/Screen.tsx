@@ -116,6 +116,7 @@ export default function Screen() {
   const extra = useQuantity('extraLossDb', 'plain', '0');
   const reserve = useQuantity('reserveDb', 'plain', '0');
   const [overlay, setOverlay] = useState(false);
+  const overlayNm = useQuantity('videoOverlayNm', 'wavelength', String(VIDEO_OVERLAY_NM));
   const fiber = picker.fiber;
 
   const state = useResult(() => {
@@ -135,13 +136,14 @@ export default function Screen() {
       reserveDb: need(reserve),
       attenuationDbPerKm: fiber.attenuationDbPerKm,
       videoOverlay: overlay,
+      videoOverlayNm: need(overlayNm),
     });
   }, [
     fiber,
     picker.error,
     generation,
     className,
-    ...[feeder, farthest, nearest, connectors, splices, extra, reserve, stage1.il, stage1.uniformity, stage2.il, stage2.uniformity].flatMap((q) => [q.value, q.failure]),
+    ...[feeder, farthest, nearest, connectors, splices, extra, reserve, overlayNm, stage1.il, stage1.uniformity, stage2.il, stage2.uniformity].flatMap((q) => [q.value, q.failure]),
     stage1.ratio,
     stage1.own,
     stage2.ratio,
@@ -149,7 +151,7 @@ export default function Screen() {
     overlay,
   ]);
 
-  const fields = [feeder, farthest, nearest, connectors, splices, extra, reserve, stage1.il, stage1.uniformity, stage2.il, stage2.uniformity];
+  const fields = [feeder, farthest, nearest, connectors, splices, extra, reserve, overlayNm, stage1.il, stage1.uniformity, stage2.il, stage2.uniformity];
   const r: PonPlanResult | undefined = state.result;
 
   const headline: Headline | undefined = r && {
@@ -183,7 +185,7 @@ export default function Screen() {
       ['Splices', shownValue(splices, '')],
       ['Extra element', shownValue(extra, 'dB')],
       ['Reserve', shownValue(reserve, 'dB')],
-      ['Video overlay', overlay ? `yes (${VIDEO_OVERLAY_NM} nm)` : 'no'],
+      ['Video overlay', overlay ? `yes (${shownValue(overlayNm, 'nm')})` : 'no'],
     ],
     outputs: [
       ['Verdict', r.headline],
@@ -251,9 +253,10 @@ export default function Screen() {
             <NumberField q={reserve} label="Reserve for repairs and ageing" unit="dB" quickPicks={[0, 1, 2]} calc={state} example="such as 1" />
             <div class="field">
               <label>
-                <input type="checkbox" checked={overlay} onChange={(e) => setOverlay((e.currentTarget as HTMLInputElement).checked)} /> Video overlay at {VIDEO_OVERLAY_NM} nm (checked downstream too)
+                <input type="checkbox" checked={overlay} onChange={(e) => setOverlay((e.currentTarget as HTMLInputElement).checked)} /> Check a video overlay downstream too
               </label>
             </div>
+            <NumberField q={overlayNm} label="Video overlay wavelength" unit="nm" quickPicks={[1550, 1555]} calc={state} example="such as 1550" help="Used when the box above is ticked." />
           </div>
         </>
       }
