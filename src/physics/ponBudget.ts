@@ -188,7 +188,7 @@ export interface PonPlanInput {
   /** Add a video overlay's downstream wavelength to the check. */
   videoOverlay?: boolean;
   /** The overlay's wavelength, nm; default 1550 nm (VIDEO_OVERLAY_NM). */
-  videoOverlayNm?: number;
+  overlayWavelengthNm?: number;
   /** Connector and splice allowances; default: typical installed values (linkBudget.ts). */
   ruleSet?: LinkRuleSet;
 }
@@ -315,9 +315,9 @@ function check(input: PonPlanInput): Checked {
   const reserveDb = requireNumber('reserveDb', input.reserveDb, { min: 0, max: MAX_PON_ELEMENT_DB, unit: 'dB' });
   const wl = PON_WAVELENGTHS[input.generation];
   const overlayNm =
-    input.videoOverlayNm === undefined
+    input.overlayWavelengthNm === undefined
       ? VIDEO_OVERLAY_NM
-      : requireNumber('videoOverlayNm', input.videoOverlayNm, { ...VIDEO_OVERLAY_RANGE_NM, unit: 'nm', hint: (v) => (v >= 1.53 && v <= 1.625 ? `did you mean ${v * 1000} nm?` : undefined) });
+      : requireNumber('overlayWavelengthNm', input.overlayWavelengthNm, { ...VIDEO_OVERLAY_RANGE_NM, unit: 'nm', hint: (v) => (v >= 1.53 && v <= 1.625 ? `did you mean ${v * 1000} nm?` : undefined) });
   const wavelengths: Checked['wavelengths'] = [
     { direction: 'downstream', wavelengthNm: wl.downstreamNm },
     ...(input.videoOverlay ? [{ direction: 'downstream' as const, wavelengthNm: overlayNm }] : []),

@@ -37,7 +37,7 @@ const hostile = objectOr(
     reserveDb: num(0, 80),
     attenuationDbPerKm: list,
     videoOverlay: maybe(fc.boolean()),
-    videoOverlayNm: maybe(num(1400, 1700)),
+    overlayWavelengthNm: maybe(num(1400, 1700)),
   }),
 ) as fc.Arbitrary<physics.PonPlanInput>;
 const valid = fc
@@ -56,7 +56,7 @@ const valid = fc
       reserveDb: inRange(0, 3),
       attenuationDbPerKm: fc.constant(g652d),
       videoOverlay: maybe(fc.boolean()),
-      videoOverlayNm: maybe(inRange(1530, 1625)),
+      overlayWavelengthNm: maybe(inRange(1530, 1625)),
     }),
   ) as fc.Arbitrary<physics.PonPlanInput>;
 

@@ -116,7 +116,7 @@ export default function Screen() {
   const extra = useQuantity('extraLossDb', 'plain', '0');
   const reserve = useQuantity('reserveDb', 'plain', '0');
   const [overlay, setOverlay] = useState(false);
-  const overlayNm = useQuantity('videoOverlayNm', 'wavelength', String(VIDEO_OVERLAY_NM));
+  const overlayNm = useQuantity('overlayWavelengthNm', 'wavelength', String(VIDEO_OVERLAY_NM));
   const fiber = picker.fiber;
 
   const state = useResult(() => {
@@ -136,7 +136,7 @@ export default function Screen() {
       reserveDb: need(reserve),
       attenuationDbPerKm: fiber.attenuationDbPerKm,
       videoOverlay: overlay,
-      videoOverlayNm: need(overlayNm),
+      overlayWavelengthNm: need(overlayNm),
     });
   }, [
     fiber,
