@@ -196,11 +196,11 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
         if (now !== open) setOpenByHand(now);
       }}
     >
-      <summary class="picker-summary" aria-label={`${label}: ${resolved.fiber ? resolved.fiber.name : 'not chosen yet'}. ${open ? 'Fold' : 'Change'}`}>
+      <summary class="picker-summary">
         <span class="picker-line">
           <strong>{shortLabel}:</strong> <span class="user-text">{resolved.fiber ? resolved.fiber.name : 'not chosen yet'}</span>
         </span>
-        <span class="picker-change" aria-hidden="true">{open ? 'Done' : 'Change'}</span>
+        <span class="picker-change">{open ? 'Done' : 'Change'}</span>
       </summary>
       <div class="picker-body" role="group" aria-label={label}>
       <div class="field">

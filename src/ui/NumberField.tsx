@@ -71,12 +71,13 @@ export function NumberInput({ id, label, unit, text, onText, error, conversion, 
       <label for={id}>{label}</label>
       <div class="field-input">
         {signed && keypad === 'decimal' && (
-          <button type="button" class="sign-toggle" aria-label={`Change the sign of ${label}`} onClick={() => onText(toggleSign(text))}>
+          <button type="button" class="sign-toggle" aria-label={`± change the sign of ${label}`} onClick={() => onText(toggleSign(text))}>
             ±
           </button>
         )}
         <input
           id={id}
+          data-number
           type="text"
           inputMode={keypad}
           enterKeyHint="done"

@@ -4,7 +4,6 @@ type ThemeChoice = 'system' | 'light' | 'dark';
 const KEY = 'modewright.theme';
 const NEXT: Record<ThemeChoice, ThemeChoice> = { system: 'light', light: 'dark', dark: 'system' };
 const LABEL: Record<ThemeChoice, string> = { system: 'Theme: auto', light: 'Theme: day', dark: 'Theme: dark' };
-const SPOKEN: Record<ThemeChoice, string> = { system: 'Theme: as the system', light: 'Theme: daylight', dark: 'Theme: dark' };
 
 function readChoice(): ThemeChoice {
   try {
@@ -29,7 +28,7 @@ export function ThemeSwitch() {
     }
   }, [choice]);
   return (
-    <button type="button" class="theme-switch" onClick={() => setChoice(NEXT[choice])} aria-label={`${SPOKEN[choice]}. Change theme`}>
+    <button type="button" class="theme-switch" onClick={() => setChoice(NEXT[choice])} aria-label={`${LABEL[choice]}: change theme`}>
       {LABEL[choice]}
     </button>
   );

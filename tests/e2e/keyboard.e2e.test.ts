@@ -98,6 +98,9 @@ describe('keyboard alone, a fiber check', () => {
     await page.keyboard.press('Enter');
     await waitForScreen(page);
 
+    // The chosen fiber is folded to one line: Enter on it opens the choice.
+    stops.push(...(await tabUntil(page, (f) => f.what.startsWith('summary') && f.name.startsWith('Fiber type:'))));
+    await page.keyboard.press('Enter');
     stops.push(...(await tabUntil(page, (f) => f.id === 'single-mode-source')));
     // A closed <select> takes type-ahead: "Typed values (core diameter and NA)".
     await page.keyboard.type('Typed');
@@ -114,21 +117,21 @@ describe('keyboard alone, a fiber check', () => {
       await page.keyboard.press('Control+A');
       await page.keyboard.type(value);
     }
-    const card = page.locator('section[aria-label="Single-mode check"]');
+    const headline = page.locator('main output');
     // V = 2π a NA / λ (Gloge 1971, eq. for the normalized frequency); shown to 4 significant figures.
     const vAt = (wavelengthNm: number) => (2 * Math.PI * (coreDiameterUm / 2) * na) / (wavelengthNm / 1000);
-    await expect.poll(async () => numberIn(await card.locator('dd.big').textContent())).toBeCloseTo(vAt(1550), 3);
+    await expect.poll(async () => numberIn(await headline.locator('.answer-value').textContent())).toBeCloseTo(vAt(1550), 3);
     // Below V = 2.405 (first zero of J0, A&S Table 9.5) only LP01 is guided.
     expect(vAt(1550)).toBeLessThan(2.405);
-    await expect.poll(() => card.locator('.verdict-ok').textContent()).toMatch(/only LP01/);
+    await expect.poll(() => headline.locator('.tone-ok .answer-verdict').textContent()).toMatch(/only LP01/);
 
     stops.push(...(await tabUntil(page, (f) => f.name === '1310 nm')));
     await page.keyboard.press('Space');
     // 2.405 < V < 3.832 (first zero of J1, A&S Table 9.5): LP01 and LP11, two LP modes.
     expect(vAt(1310)).toBeGreaterThan(2.405);
     expect(vAt(1310)).toBeLessThan(3.832);
-    await expect.poll(async () => numberIn(await card.locator('dd.big').textContent())).toBeCloseTo(vAt(1310), 3);
-    await expect.poll(() => card.locator('.verdict-warn').textContent()).toMatch(/2 LP modes/);
+    await expect.poll(async () => numberIn(await headline.locator('.answer-value').textContent())).toBeCloseTo(vAt(1310), 3);
+    await expect.poll(() => headline.locator('.tone-warn .answer-verdict').textContent()).toMatch(/2 LP modes/);
 
     const unringed = stops.filter((s) => !s.visibleFocus).map((s) => s.what);
     expect(unringed, 'every keyboard stop shows a focus ring').toEqual([]);
@@ -147,10 +150,10 @@ describe('typed units', () => {
       try {
         await page.goto(`${server.url}#/${id}`);
         await waitForScreen(page);
-        const fieldId = await page.locator('input[id$="avelengthNm"]').first().getAttribute('id');
+        const fieldId = await page.locator('input[id$="avelengthNm"]:visible').first().getAttribute('id');
         expect(fieldId, 'the screen has a wavelength field').toBeTruthy();
         const field = page.locator(`#${fieldId}`);
-        const results = page.locator('main .result-card');
+        const results = page.locator('main output, main .result-card');
         const settled = () => page.waitForFunction(() => !document.querySelector('[aria-busy="true"]'), undefined, { timeout: 15_000 });
 
         await field.fill('1550');

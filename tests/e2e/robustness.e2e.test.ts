@@ -28,6 +28,9 @@ const HOSTILE: { label: string; text: string; number?: boolean }[] = [
 /** Texts no fiber-type name may be (the others are fair names: "1,2,3", emoji and Arabic-Indic digits are). */
 const NEVER_A_NAME = new Set(['empty', 'only spaces', '10,000 characters', 'markup']);
 const SHOWS_NOT_A_NUMBER = /\bNaN\b|Infinity|undefined|\[object /;
+/** A developer's argument name (fromADb, bendRadiusMm, elements[0].lengthKm) once the trade's own words are set aside. */
+const INTERNAL_NAME = /\b[a-z]+[A-Z][A-Za-z0-9]*\b|\w+\[\d+\]\.\w+/;
+const TRADE_WORDS = /\b(dBm?|mW|µW|nW|kHz|MHz|GHz|THz)\b/g;
 /** Picker sources that reveal number fields of their own. */
 const PICKER_SOURCES = ['typed', 'label'];
 
@@ -69,9 +72,10 @@ async function snapshot(page: Page, id: string): Promise<Snapshot> {
     const field = input?.closest('.field');
     return {
       text: main.innerText,
-      results: main.querySelectorAll('.result-card .result-body').length,
-      resultText: [...main.querySelectorAll('.result-card .result-body')].map((e) => (e as HTMLElement).innerText).join('\n'),
-      stale: main.querySelectorAll('.result-card .status-stale').length,
+      // The headline <output> counts as a result beside the cards below it.
+      results: main.querySelectorAll('.result-card .result-body, .answer-line').length,
+      resultText: [...main.querySelectorAll('.result-card .result-body, .answer-line')].map((e) => (e as HTMLElement).innerText).join('\n'),
+      stale: main.querySelectorAll('.result-card .status-stale, .answer-stale').length,
       fieldError: (field?.querySelector('.field-error[role="alert"]') as HTMLElement | null)?.innerText ?? '',
       invalid: input?.getAttribute('aria-invalid') === 'true',
       pwned: (window as unknown as { __pwned?: unknown }).__pwned !== undefined,
@@ -83,7 +87,7 @@ async function snapshot(page: Page, id: string): Promise<Snapshot> {
 /** Ids of the visible text inputs in main (number fields and any other typed text). */
 async function visibleInputs(page: Page): Promise<{ id: string; number: boolean }[]> {
   const all = await page.$$eval('main input:not([type]), main input[type="text"], main input[type="search"], main textarea', (els) =>
-    els.map((e) => ({ id: e.id, number: e.getAttribute('inputmode') === 'decimal', shown: (e as HTMLElement).offsetParent !== null })),
+    els.map((e) => ({ id: e.id, number: e.hasAttribute('data-number'), shown: (e as HTMLElement).offsetParent !== null })),
   );
   return all.filter((f) => f.id && f.shown).map(({ id, number }) => ({ id, number }));
 }
@@ -106,6 +110,8 @@ async function fuzzInputs(page: Page, where: string, done: Set<string>): Promise
       const s = await snapshot(page, id);
       const at = `${where} #${id} given ${h.label}`;
       if (SHOWS_NOT_A_NUMBER.test(s.text)) problems.push(`${at}: the screen shows "${s.text.match(SHOWS_NOT_A_NUMBER)![0]}"`);
+      const internal = s.text.replace(TRADE_WORDS, '').match(INTERNAL_NAME);
+      if (internal) problems.push(`${at}: the screen shows the internal name "${internal[0]}"`);
       if (s.pwned || s.liveImages > 0) problems.push(`${at}: markup came to life`);
       if (s.results < before.results) problems.push(`${at}: a result disappeared (${before.results} → ${s.results})`);
       const refused = s.fieldError !== '' || s.invalid;
@@ -143,7 +149,9 @@ describe.each(CALCULATORS.map((f) => ({ id: f.id, title: f.title })))('hostile t
     try {
       const done = new Set<string>();
       const problems = await fuzzInputs(page, title, done);
-      // The fiber picker's own fields, for a fiber typed in and for label values.
+      // The fiber picker's own fields, for a fiber typed in and for label values (the folded picker opened first).
+      await page.$$eval('main details.fiber-picker', (ds) => ds.forEach((d) => ((d as HTMLDetailsElement).open = true)));
+      await settle(page);
       for (const select of await page.$$eval('main select[id$="-source"]', (els) => els.map((e) => e.id))) {
         const sources = await page.$$eval(`#${select} option`, (os) => os.map((o) => (o as HTMLOptionElement).value));
         for (const source of sources.filter((s) => PICKER_SOURCES.includes(s))) {

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { formatFixed, formatNumber } from '../../src/ui/format';
 import { niceTicks } from '../../src/ui/ticks';
 import { reportText } from '../../src/ui/copyText';
+import { keepNumbersWithUnits } from '../../src/ui/keepTogether';
 
 describe('numbers on screen', () => {
   it.each([NaN, Infinity, -Infinity, undefined])('%s is shown as a dash, never as NaN or Infinity', (v) => {
@@ -47,5 +48,18 @@ describe('hand-over text', () => {
     expect(t).toContain('- Gaussian fields');
     expect(t).toContain('2026-12-01 10:00 UTC');
     expect(t).toMatch(/Modewright .* \(build .*\)/);
+  });
+});
+
+describe('a number and its unit stay together in text built from data', () => {
+  it.each([
+    ['cutoff 1260 nm on the label', 'cutoff 1260\u00a0nm on the label'],
+    ['0.35 dB/km at 1310 nm', '0.35\u00a0dB/km at 1310\u00a0nm'],
+    ['−3 dBm and 0.5 mW', '−3\u00a0dBm and 0.5\u00a0mW'],
+    ['1 turn, 10 turns, 30 %', '1\u00a0turn, 10\u00a0turns, 30\u00a0%'],
+    ['G.652 fiber, 2 modes', 'G.652 fiber, 2 modes'],
+    ['12 mmHg is no unit of ours', '12 mmHg is no unit of ours'],
+  ])('"%s" is laid out as "%s"', (text, expected) => {
+    expect(keepNumbersWithUnits(text)).toBe(expected);
   });
 });

@@ -5,10 +5,11 @@ import { NumberField, OPERATING_WAVELENGTHS_NM } from '../../ui/NumberField';
 import { need, useQuantity } from '../../ui/useQuantity';
 import { useResult, cardError } from '../../ui/useResult';
 import { ResultCard } from '../../ui/ResultCard';
-import { HowComputed } from '../../ui/HowComputed';
+import { CalcScreen, ShortProse, type Headline } from '../../ui/CalcScreen';
+import { DataTable } from '../../ui/DataTable';
 import { LinePlot } from '../../ui/Plot';
-import { formatNumber } from '../../ui/format';
-import { reportText } from '../../ui/copyText';
+import { formatNumber, formatQuantity, lpName, withUnit } from '../../ui/format';
+import type { ReportSpec } from '../../ui/copyText';
 import { useFiberPicker } from '../../ui/FiberPicker';
 import { InputError, LP11_CUTOFF_V, lpBvCurve, lpCutoffV, singleModeCheck, type LPMode } from '../../physics';
 import { ModePicture } from './ModePicture';
@@ -18,9 +19,7 @@ const DIAGRAM_FAMILIES: [number, number][] = [[0, 1], [1, 1], [2, 1], [0, 2], [3
 /** The mode table lists this many modes; the rest are counted. */
 const TABLE_ROWS = 40;
 
-const name = (m: { l: number; m: number }) => `LP${m.l}${m.m}`;
-
-/** A field's own error is shown beside the field; the card then only points to it. */
+const name = (m: { l: number; m: number }) => lpName(m.l, m.m);
 
 export default function Screen() {
   const picker = useFiberPicker({ id: 'single-mode', label: 'Fiber type', kinds: ['single-mode', 'multimode'], defaultCategory: 'G.652.D' });
@@ -33,12 +32,11 @@ export default function Screen() {
     const wavelengthNm = need(wavelength);
     return { ...singleModeCheck({ coreRadiusUm: fiber.coreRadiusUm, na: fiber.na, wavelengthNm }), wavelengthNm };
   }, [fiber, picker.error, wavelength.text]);
-  const calc = { error: state.error, errorArgument: state.errorArgument };
   const r = state.result;
 
   const vMax = r ? Math.max(6, Math.min(r.v * 1.3, 12)) : 6;
   const diagram = useResult(
-    () => DIAGRAM_FAMILIES.map(([l, m]) => ({ name: `LP${l}${m}`, points: lpBvCurve(l, m, vMax, 80) })).filter((s) => s.points.length > 1),
+    () => DIAGRAM_FAMILIES.map(([l, m]) => ({ name: lpName(l, m), points: lpBvCurve(l, m, vMax, 80) })).filter((s) => s.points.length > 1),
     [vMax],
   );
 
@@ -47,18 +45,23 @@ export default function Screen() {
   // The label's measured cutoff decides in practice: above it LP11 is stripped within metres,
   // even where the equivalent step-index model still guides it weakly.
   const verdict = !r
-    ? { css: '', words: '', practical: false }
+    ? { tone: 'info' as const, words: '', practical: false }
     : r.singleMode
-      ? { css: 'verdict-ok', words: 'Single-mode: only LP01 is guided', practical: false }
+      ? { tone: 'ok' as const, words: 'Single-mode: only LP01 is guided', practical: false }
       : labelCutoff !== undefined && r.wavelengthNm > labelCutoff
-        ? { css: 'verdict-ok', words: 'Single-mode in practice: above the cutoff on the label', practical: true }
-        : { css: 'verdict-warn', words: `Not single-mode: ${r.lpModeCount} LP modes are guided`, practical: false };
+        ? { tone: 'ok' as const, words: 'Single-mode in practice: above the cutoff on the label', practical: true }
+        : { tone: 'warn' as const, words: `Not single-mode: ${r.lpModeCount} LP modes are guided`, practical: false };
 
-  const copy =
+  const headline: Headline | undefined = r && {
+    label: `V at ${withUnit(formatNumber(r.wavelengthNm, 6), 'nm')}`,
+    value: formatNumber(r.v, 4),
+    verdict: verdict.words,
+    tone: verdict.tone,
+  };
+
+  const report: ReportSpec | undefined =
     r &&
-    fiber &&
-    !state.stale &&
-    reportText({
+    fiber && {
       title: 'Single-mode check',
       inputs: [
         ['Fiber type', fiber.name],
@@ -76,42 +79,55 @@ export default function Screen() {
         ['Summary', r.summary],
       ],
       assumptions: ['Weakly guiding step-index fiber, LP modes (Gloge 1971); single-mode below V = 2.405.', ...fiber.notes],
-    });
+    };
 
   return (
-    <>
-      <h2>Fiber and wavelength</h2>
-      {picker.element}
-      <div class="form">
-        <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={OPERATING_WAVELENGTHS_NM} calc={calc} />
-      </div>
-
-      <ResultCard title="Single-mode check" stale={state.stale} error={cardError(state, ['wavelengthNm'])} copyText={copy || undefined}>
+    <CalcScreen
+      headline={headline}
+      status={{ stale: state.stale, error: cardError(state, [wavelength.argument]) }}
+      report={report}
+      inputsTitle="Fiber and wavelength"
+      inputs={
+        <>
+          {picker.element}
+          <div class="form">
+            <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={OPERATING_WAVELENGTHS_NM} calc={state} />
+          </div>
+        </>
+      }
+      how={{
+        formula: 'V = 2π a NA / λ; LP modes from u J_{l−1}(u)/J_l(u) = −w K_{l−1}(w)/K_l(w), u² + w² = V², b = w²/V²; LP_lm is cut off where J_{l−1}(V) = 0',
+        source: 'Gloge 1971 (weakly guiding fibers); Bessel functions and zeros checked against Abramowitz & Stegun Tables 9.1, 9.5, 9.8',
+        assumptions: [
+          'Step-index core of radius a; a fiber type given by its label is replaced by its equivalent step-index core.',
+          'Weak guidance (core and cladding indices close): modes are grouped into LP modes.',
+          'Single-mode below V = 2.405, the first zero of J₀ (common practice).',
+        ],
+        validity: 'V from 0.1 to 300. Below V ≈ 1 the single mode spreads far into the cladding and bends easily strip it.',
+      }}
+    >
+      <ResultCard title="Why, and the modes" stale={state.stale}>
         {r && (
           <>
-            <p class={verdict.css}>{verdict.words}</p>
             {verdict.practical && (
-              <p>
-                The label's {fiber?.cutoffKind === 'cable' ? 'cable' : 'fiber'} cutoff ({labelCutoff} nm) is below {formatNumber(r.wavelengthNm, 6)} nm. In theory higher modes are
-                still guided here, but so weakly (LP11: b = {formatNumber(r.modes[1]?.b, 2)}) that they are lost within metres; that is what a measured cutoff means.
-              </p>
+              <ShortProse
+                text={`The label's ${fiber?.cutoffKind === 'cable' ? 'cable' : 'fiber'} cutoff (${withUnit(String(labelCutoff), 'nm')}) is below ${withUnit(formatNumber(r.wavelengthNm, 6), 'nm')}. In theory higher modes are still guided here, but so weakly (LP11: b = ${formatNumber(r.modes[1]?.b, 2)}) that they are lost within metres. That is what a measured cutoff means.`}
+              />
             )}
-            <p>{verdict.practical ? `In theory (step-index model): ${r.summary}` : r.summary}</p>
+            <ShortProse text={verdict.practical ? `In theory (step-index model): ${r.summary}` : r.summary} />
             <dl class="kv">
-              <dt>V-number</dt>
-              <dd class="big">{formatNumber(r.v, 4)}</dd>
               <dt>Distance to the LP11 cutoff</dt>
               <dd>
-                {r.relativeDistanceToCutoff <= 0 ? `${formatNumber(-r.relativeDistanceToCutoff * 100, 3)} % below` : `${formatNumber(r.relativeDistanceToCutoff * 100, 3)} % above`} V = 2.405
-                {' '}({formatNumber(Math.abs(r.wavelengthMarginNm), 4)} nm {r.wavelengthMarginNm >= 0 ? 'above' : 'below'} the cutoff wavelength)
+                <span class="num">{withUnit(formatNumber(Math.abs(r.relativeDistanceToCutoff) * 100, 3), '%')}</span> {r.relativeDistanceToCutoff <= 0 ? 'below' : 'above'} V = 2.405 (
+                <span class="num">{formatQuantity(Math.abs(r.wavelengthMarginNm), 'nm')}</span> {r.wavelengthMarginNm >= 0 ? 'above' : 'below'} the cutoff wavelength)
               </dd>
               <dt>Theoretical LP11 cutoff wavelength</dt>
-              <dd>{formatNumber(r.lp11CutoffWavelengthNm, 5)} nm</dd>
+              <dd class="num">{formatQuantity(r.lp11CutoffWavelengthNm, 'nm', 5)}</dd>
               {labelCutoff !== undefined && (
                 <>
                   <dt>Cutoff on the label</dt>
                   <dd>
-                    {labelCutoff} nm ({fiber?.cutoffKind === 'cable' ? 'cable cutoff' : 'fiber cutoff'}): a measured cutoff, below the theoretical one.
+                    <span class="num">{withUnit(String(labelCutoff), 'nm')}</span> ({fiber?.cutoffKind === 'cable' ? 'cable cutoff' : 'fiber cutoff'}): a measured cutoff, below the theoretical one.
                     {r.wavelengthNm > labelCutoff ? ' Above it, the fiber counts as single-mode in practice.' : ' At or below it, LP11 can carry light.'}
                   </dd>
                 </>
@@ -123,35 +139,22 @@ export default function Screen() {
             </dl>
             {fiber?.profile === 'graded' && (
               <p class="note">
-                This fiber has a graded core; the check treats it as step index with the same core and NA. A parabolic core guides about half as many modes (Gloge &amp; Marcatili 1973).
+                This fiber has a graded core; the check treats it as step index with the same core and NA. A parabolic core guides about half as many modes (Gloge & Marcatili 1973).
               </p>
             )}
-            <div class="table-wrap">
-              <table>
-                <caption class="note">Guided modes, most tightly bound first</caption>
-                <thead>
-                  <tr>
-                    <th scope="col">LP mode</th>
-                    <th scope="col">Exact modes it stands for</th>
-                    <th scope="col">b</th>
-                    <th scope="col">Cutoff V</th>
-                    <th scope="col">Modes</th>
-                  </tr>
-                </thead>
-                <tbody>
-                  {r.modes.slice(0, TABLE_ROWS).map((m) => (
-                    <tr key={name(m)}>
-                      <td>{name(m)}</td>
-                      <td>{m.vectorModes.join(', ')}</td>
-                      <td>{formatNumber(m.b, 4)}{m.nearCutoff ? ' (at cutoff)' : ''}</td>
-                      <td>{m.cutoffV === 0 ? 'none' : formatNumber(m.cutoffV, 5)}</td>
-                      <td>{m.degeneracy}</td>
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-              {r.modes.length > TABLE_ROWS && <p class="note">… and {r.modes.length - TABLE_ROWS} more LP modes.</p>}
-            </div>
+            <DataTable
+              caption="Guided modes, most tightly bound first"
+              rows={r.modes.slice(0, TABLE_ROWS)}
+              rowKey={(m) => name(m)}
+              columns={[
+                { label: 'LP mode', cell: (m) => name(m), num: true },
+                { label: 'Exact modes it stands for', cell: (m) => m.vectorModes.join(', ') },
+                { label: 'b', cell: (m) => `${formatNumber(m.b, 4)}${m.nearCutoff ? ' (at cutoff)' : ''}`, num: true },
+                { label: 'Cutoff V', cell: (m) => (m.cutoffV === 0 ? 'none' : formatNumber(m.cutoffV, 5)), num: true },
+                { label: 'Modes', cell: (m) => m.degeneracy, num: true },
+              ]}
+            />
+            {r.modes.length > TABLE_ROWS && <p class="note">… and {r.modes.length - TABLE_ROWS} more LP modes.</p>}
           </>
         )}
       </ResultCard>
@@ -173,7 +176,7 @@ export default function Screen() {
               ]}
               points={r.modes.filter((m) => DIAGRAM_FAMILIES.some(([l, mm]) => l === m.l && mm === m.m)).map((m) => ({ x: r.v, y: m.b, label: name(m) }))}
             />
-            <p class="note">Each curve starts at its cutoff (b = 0) and rises toward 1 as V grows; a mode is guided when its curve starts left of the V marker.</p>
+            <ShortProse text="Each curve starts at its cutoff (b = 0) and rises toward 1 as V grows. A mode is guided when its curve starts left of the V marker." />
           </>
         )}
       </ResultCard>
@@ -196,16 +199,6 @@ export default function Screen() {
         )}
       </ResultCard>
 
-      <HowComputed
-        formula="V = 2π a NA / λ; LP modes from u J_{l−1}(u)/J_l(u) = −w K_{l−1}(w)/K_l(w), u² + w² = V², b = w²/V²; LP_lm is cut off where J_{l−1}(V) = 0"
-        source="Gloge 1971 (weakly guiding fibers); Bessel functions and zeros checked against Abramowitz & Stegun Tables 9.1, 9.5, 9.8"
-        assumptions={[
-          'Step-index core of radius a; a fiber type given by its label is replaced by its equivalent step-index core.',
-          'Weak guidance (core and cladding indices close): modes are grouped into LP modes.',
-          'Single-mode below V = 2.405, the first zero of J₀ (common practice).',
-        ]}
-        validity="V from 0.1 to 300. Below V ≈ 1 the single mode spreads far into the cladding and bends easily strip it."
-      />
-    </>
+    </CalcScreen>
   );
 }

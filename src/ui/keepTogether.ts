@@ -1,0 +1,28 @@
+// A number and its unit never part. Text built from data (fiber notes, reasons, assumptions, prose)
+// says "1260 nm" with an ordinary space, where a narrow screen may break the line. One rule, applied
+// once to every text node Preact renders: the space between a number and a unit that follows it
+// becomes a no-break space. Formatted values (src/ui/format.ts) already carry one.
+import { options } from 'preact';
+
+/** Units the app writes after a number (the trade's symbols), longest first so "dBm" wins over "dB". */
+const UNITS = ['dB/km', 'dBm', 'dB', 'nm', 'µm', 'μm', 'um', 'mm', 'cm', 'km', 'm', 'mW', 'µW', 'nW', 'W', 'THz', 'GHz', 'MHz', 'ps/√km', 'ps', 'ns', 'µs', '%', '°', 'turns?', 'Gb/s', 'Mb/s', 'dB/turn'];
+const UNIT_AFTER_SPACE = new RegExp(`(\\d)[ \\u2009](?=(?:${UNITS.map((u) => u.replace(/[/]/g, '\\/')).join('|')})(?![\\p{L}\\d]))`, 'gu');
+
+export function keepNumbersWithUnits(text: string): string {
+  return text.replace(UNIT_AFTER_SPACE, '$1\u00a0');
+}
+
+let installed = false;
+
+/** Installs the rule on Preact's vnode hook (once); text vnodes carry their string as props. */
+export function installKeepTogether(): void {
+  if (installed) return;
+  installed = true;
+  const previous = options.vnode;
+  options.vnode = (vnode) => {
+    if (vnode.type === null && typeof vnode.props === 'string') {
+      (vnode as unknown as { props: string }).props = keepNumbersWithUnits(vnode.props);
+    }
+    previous?.(vnode);
+  };
+}
