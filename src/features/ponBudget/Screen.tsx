@@ -309,7 +309,7 @@ export default function Screen() {
               { label: 'Class', cell: (f) => f.lossClass.name },
               { label: 'Range', cell: (f) => withUnit(`${f.lossClass.minDb}–${f.lossClass.maxDb}`, 'dB'), num: true },
               { label: 'Fits', cell: (f) => (f.fits ? 'yes' : 'no') },
-              { label: 'Margin', cell: (f) => (f.fits ? `${formatDb(f.worstMarginDb)} to spare` : `${formatDb(-f.worstMarginDb)} short`), num: true },
+              { label: 'Margin to the nearer limit', cell: (f) => `${f.worstMarginDb >= 0 ? '+' : '−'}${formatDb(Math.abs(f.worstMarginDb))}`, num: true },
             ]}
           />
           <p class="note">Class limits: {r.lossClass.source}.</p>
