@@ -6,6 +6,10 @@ export default defineConfig({
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     exclude: ['tests/e2e/**', 'node_modules/**'],
     environment: 'node',
-    testTimeout: 60_000,
+    // Property tests run on a fixed seed per test (printed on failure); `npm run fuzz` draws fresh ones.
+    setupFiles: ['tests/setup/propertySeed.ts'],
+    // Not a speed limit (speed goals are in `npm run bench`): a stop for a test that never ends, set so generous
+    // (about 20× the slowest test file on a shared 2-core machine) that a busy machine cannot trip it.
+    testTimeout: 600_000,
   },
 });

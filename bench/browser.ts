@@ -1,7 +1,8 @@
 // Browser figures for `npm run bench`, measured in Debian's Chromium against a production
 // build (path given as the first argument): JavaScript loaded at start (gzipped), total
-// precache size, and time from navigation to the first rendered calculator offline with
-// 4× CPU throttling. Figures are reported, never asserted.
+// precache size, time from navigation to the first rendered calculator offline with
+// 4× CPU throttling, long tasks while typing, and the fiber library with 1,000 saved types
+// (key in Search → frame, reload → list, at CPU ÷4). Figures are reported, never asserted.
 import { readFileSync, statSync } from 'node:fs';
 import { join } from 'node:path';
 import { gzipSync } from 'node:zlib';
@@ -238,13 +239,144 @@ async function measureTypingLongTasks(): Promise<void> {
   }
 }
 
-console.log('\nBrowser figures (Chromium, production build):');
-const server = await startServer(distDir);
-try {
-  await measureStartJs(server.url);
-} finally {
-  await server.close();
+// The fiber library with a thousand saved types on a slow phone (issue 13): how long a key in Search
+// takes to reach the screen, and how long a reload takes to list the types, both at CPU ÷4.
+const LIBRARY_TYPES = 1000;
+const KEY_TO_FRAME_GOAL_MS = 100;
+const RELOAD_TO_LIST_GOAL_MS = 1000;
+const LIBRARY_RELOADS = 7;
+// Typed one key at a time, then erased: every prefix is a new search, every erase too.
+const LIBRARY_QUERIES = ['drum 12', 'riser 9', 'om4'];
+
+function libraryRecords(): Record<string, unknown>[] {
+  const t0 = Date.UTC(2026, 0, 1);
+  return Array.from({ length: LIBRARY_TYPES }, (_, i) => {
+    const graded = i % 3 === 0;
+    const name = graded ? `Riser ${i} patch` : `Drum ${i} backbone`;
+    const common = { id: `ft_bench_${String(i).padStart(4, '0')}`, name, nameKey: name.toLowerCase(), claddingDiameterUm: 125, createdAt: t0 + i, updatedAt: t0 + i };
+    return graded
+      ? { ...common, profile: 'graded', gradedAlpha: 2, coreDiameterUm: 50, na: 0.2, attenuation: [{ wavelengthNm: 850, dbPerKm: 2.5 + (i % 7) / 10 }], category: 'OM4', notes: `bench record ${i}` }
+      : { ...common, profile: 'label', cutoffWavelengthNm: 1200 + (i % 60), cutoffKind: 'cable', mfdUm: 8.8 + (i % 8) / 10, mfdWavelengthNm: 1310, attenuation: [{ wavelengthNm: 1310, dbPerKm: 0.34 }, { wavelengthNm: 1550, dbPerKm: 0.2 }], category: 'G.652.D', notes: '' };
+  });
 }
-measurePrecache();
-await measureOfflineStart();
-await measureTypingLongTasks();
+
+// In the page, from navigation start: when the first saved type's row is in the document.
+function listProbe(): void {
+  const w = window as unknown as { __listMs?: number };
+  new MutationObserver(() => {
+    if (w.__listMs === undefined && document.querySelector('.fiber-list .fiber-item')) w.__listMs = performance.now();
+  }).observe(document, { childList: true, subtree: true });
+}
+
+// Key → next frame: from the key's event time to a task queued from the first animation frame after
+// the input event, which runs once that frame is rendered. Preact renders a state change in a
+// microtask, so the filtered list is part of that frame.
+function keyProbe(): void {
+  const w = window as unknown as { __keyMs: number[] };
+  w.__keyMs = [];
+  document.addEventListener(
+    'keydown',
+    (e) => {
+      if ((e.target as HTMLElement | null)?.id !== 'lib-search') return;
+      const t0 = e.timeStamp;
+      document.addEventListener(
+        'input',
+        () =>
+          requestAnimationFrame(() => {
+            const ch = new MessageChannel();
+            ch.port1.onmessage = () => w.__keyMs.push(performance.now() - t0);
+            ch.port2.postMessage(0);
+          }),
+        { once: true },
+      );
+    },
+    true,
+  );
+}
+
+function goalRow(name: string, samples: number[], goalMs: number): void {
+  samples.sort((a, b) => a - b);
+  const median = quantile(samples, 0.5);
+  const ratio = median / goalMs;
+  printRow({
+    name,
+    median: formatMs(median),
+    p90: formatMs(quantile(samples, 0.9)),
+    runs: String(samples.length),
+    goal: `≤ ${formatMs(goalMs)}`,
+    ratio: `${ratio.toFixed(2)}${ratio > 1 ? ' over' : ''}`,
+  });
+}
+
+async function measureLibrary(): Promise<void> {
+  const server = await startServer(distDir!);
+  const browser = await launchBrowser();
+  try {
+    const context = await newContext(browser);
+    await context.addInitScript(listProbe);
+    await context.addInitScript(keyProbe);
+    const page = await context.newPage();
+    await page.goto(`${server.url}#/library`);
+    await page.locator('#lib-saved').waitFor();
+    // Planted straight into IndexedDB (the app's store and schema), as a library saved over months holds them.
+    await page.evaluate(
+      ([dbName, recs]) =>
+        new Promise<void>((resolve, reject) => {
+          const req = indexedDB.open(dbName);
+          req.onerror = () => reject(req.error);
+          req.onsuccess = () => {
+            const tx = req.result.transaction('fiberTypes', 'readwrite');
+            for (const r of recs) tx.objectStore('fiberTypes').put(r);
+            tx.oncomplete = () => {
+              req.result.close();
+              resolve();
+            };
+            tx.onerror = () => reject(tx.error);
+          };
+        }),
+      ['modewright-fiber-library', libraryRecords()] as const,
+    );
+    const cdp = await context.newCDPSession(page);
+    await cdp.send('Emulation.setCPUThrottlingRate', { rate: CPU_SLOWDOWN });
+
+    const reloads: number[] = [];
+    for (let i = 0; i <= LIBRARY_RELOADS; i++) {
+      await page.reload();
+      const t = await page.waitForFunction(() => (window as unknown as { __listMs?: number }).__listMs, undefined, { timeout: 30_000 }).then((h) => h.jsonValue() as Promise<number>);
+      if (i > 0) reloads.push(t); // the first reload warms the caches, as a phone that opened the app before
+    }
+    const count = await page.locator('#lib-count').textContent().catch(() => null);
+
+    const search = page.locator('#lib-search');
+    await search.click();
+    await page.waitForTimeout(500);
+    for (const q of LIBRARY_QUERIES) {
+      await search.pressSequentially(q, { delay: 150 });
+      for (let i = 0; i < q.length; i++) await search.press('Backspace', { delay: 0 }).then(() => page.waitForTimeout(150));
+    }
+    await page.waitForTimeout(500);
+    const keys = await page.evaluate(() => (window as unknown as { __keyMs: number[] }).__keyMs);
+    goalRow(`library ${LIBRARY_TYPES} types: key in Search → frame, CPU ÷${CPU_SLOWDOWN}`, keys, KEY_TO_FRAME_GOAL_MS);
+    goalRow(`library ${LIBRARY_TYPES} types: reload → list, CPU ÷${CPU_SLOWDOWN}`, reloads, RELOAD_TO_LIST_GOAL_MS);
+    console.log(`  (${keys.length} keys typed and erased in ${LIBRARY_QUERIES.map((q) => `"${q}"`).join(', ')}; list said: ${count?.trim() ?? '—'})`);
+    await context.close();
+  } finally {
+    await browser.close();
+    await server.close();
+  }
+}
+
+console.log('\nBrowser figures (Chromium, production build):');
+// BENCH_ONLY=library runs only the library figures (quicker when working on the library).
+if (process.env.BENCH_ONLY !== 'library') {
+  const server = await startServer(distDir);
+  try {
+    await measureStartJs(server.url);
+  } finally {
+    await server.close();
+  }
+  measurePrecache();
+  await measureOfflineStart();
+  await measureTypingLongTasks();
+}
+await measureLibrary();

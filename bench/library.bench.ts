@@ -1,4 +1,4 @@
-// Fiber library (issue 5): listing 1,000 saved types and importing 1,000 records.
+// Fiber library (issues 5 and 13): listing 1,000 saved types, searching them, importing 1,000 records.
 // Runs in Node over fake-indexeddb (an in-memory IndexedDB written in JS), not a browser's IndexedDB,
 // and measures the data path only: no DOM render, since no string renderer for Preact is installed.
 // "Listing" = read all through the store + search/sort + the per-row text and check the list shows.
@@ -6,11 +6,10 @@
 // calls with the same rules (warm-up, ≥ 20 samples, median) and prints through the same table.
 import 'fake-indexeddb/auto';
 import { IDBFactory } from 'fake-indexeddb';
-import { formatMs, parseGoalMs, printRow, quantile, results } from './harness';
+import { benchSync, formatMs, parseGoalMs, printRow, quantile, results } from './harness';
 import { FiberStore } from '../src/fibers/db';
 import { applyImport, exportLibrary, planImport, readBackup } from '../src/fibers/backup';
-import { filterAndSort } from '../src/features/library/query';
-import { describeType } from '../src/features/library/FiberList';
+import { buildIndex, filterAndSort, PAGE_ROWS, rowFacts, search } from '../src/features/library/query';
 import { validateRecord } from '../src/fibers/validate';
 import type { FiberType, FiberTypeInput } from '../src/fibers/model';
 
@@ -55,12 +54,12 @@ const listStore = await FiberStore.open({ name: 'bench-list' });
 await listStore.applyRecords(RECORDS, 'replace');
 
 await benchAsync(
-  'library: list 1,000 saved types (read + sort + row text)',
+  'library: list 1,000 saved types (read + index + first page of rows)',
   async () => {
-    const all = await listStore.list();
-    const rows = filterAndSort(all, '', 'name');
+    const index = buildIndex(await listStore.list());
     let chars = 0;
-    for (const r of rows) chars += validateRecord(r).ok ? describeType(r).length + r.name.length : 0;
+    // A fresh copy of each shown record, so the per-row facts are computed, not found kept.
+    for (const t of index.byName.slice(0, PAGE_ROWS)) chars += rowFacts({ ...t.record }).description.length + t.record.name.length;
     return chars;
   },
   '≤ 50 ms',
@@ -71,7 +70,16 @@ await benchAsync(
   async () => filterAndSort(await listStore.list(), 'drum 12', 'recent').length,
   '≤ 50 ms',
 );
+
+// What one key in Search costs once the library is loaded: the index is built when the records
+// change (timed separately), a key only filters it. The browser figure (bench/browser.ts) adds the render.
+const LOADED = await listStore.list();
 listStore.close();
+benchSync('library: build the search index of 1,000 types (per change)', () => buildIndex(LOADED).size, { goal: '≤ 50 ms' });
+const INDEX = buildIndex(LOADED);
+const KEYS = ['d', 'dr', 'dru', 'drum', 'drum ', 'drum 1', 'drum 12', 'drum 1', 'drum ', 'drum', ''];
+let k = 0;
+benchSync('library: one key in Search over 1,000 types (index built)', () => search(INDEX, KEYS[k++ % KEYS.length]!, 'name').length, { goal: '≤ 5 ms' });
 
 const importStore = await FiberStore.open({ name: 'bench-import' });
 await benchAsync(

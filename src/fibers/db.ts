@@ -9,7 +9,9 @@
 //       with a log of the migrations run on this device.
 // A migration never drops a record: what it cannot convert it leaves as it was, and validation marks it.
 import { openDB, type DBSchema, type IDBPDatabase, type IDBPTransaction } from 'idb';
-import { nameKeyOf, newFiberId, type FiberType, type FiberTypeInput } from './model';
+import { contentSignature, nameKeyOf, newFiberId, type FiberType, type FiberTypeInput } from './model';
+import { fieldChanges } from './differences';
+import { proposeDistinctName } from './names';
 import { describeErrors, validateInput, validateRecord, type FieldErrors } from './validate';
 
 export const DB_NAME = 'modewright-fiber-library';
@@ -97,6 +99,59 @@ export class NotFoundError extends StoreError {
   constructor(id: string) {
     super(`No fiber type with id ${id} is in the library (it may have been deleted in another tab).`);
   }
+}
+
+/**
+ * Add or rename by hand: the name is already saved for another type (same name once case and spacing
+ * are ignored). Nothing was written; the person chooses a distinct name (one is proposed) or keeps it.
+ */
+export class NameClashError extends StoreError {
+  override name = 'NameClashError';
+  constructor(
+    readonly existing: FiberType,
+    readonly proposedName: string,
+  ) {
+    super(`Not saved yet: a fiber type is already saved as “${existing.name}”. Two entries with the same name cannot be told apart in the pickers. Save it as “${proposedName}”, change the name, or keep the same name on purpose.`);
+  }
+}
+
+/**
+ * An edit was based on a version of the record that is no longer the saved one: another tab (or an
+ * import) changed it meanwhile. Nothing was written; `current` is the saved version, `changes` what
+ * differs from the version the edit started from.
+ */
+export class EditConflictError extends StoreError {
+  override name = 'EditConflictError';
+  readonly changes: string[];
+  constructor(
+    readonly current: FiberType,
+    readonly base: FiberType,
+  ) {
+    const changes = fieldChanges(base, current);
+    super(
+      `Not saved: “${current.name}” was changed in another tab (or by an import) after you opened it here${changes.length ? `: ${changes.join('; ')}` : ''}. Load the other version, or save yours over it knowingly.`,
+    );
+    this.changes = changes;
+  }
+}
+
+/** The longest name prefix that can still be followed by " (k)": names sharing it are the candidates for a proposal. */
+function proposalRange(nameKey: string): IDBKeyRange {
+  return IDBKeyRange.bound(nameKey, nameKey + '\uffff');
+}
+
+export interface WriteOptions {
+  /** Refuse (NameClashError) when another saved type has the same name. The form asks for this; imports and undo do not. */
+  refuseSameName?: boolean;
+}
+
+export interface UpdateOptions extends WriteOptions {
+  /**
+   * The version the edit started from. When the saved record is no longer that version (its change
+   * time or its content differ), the update is refused with EditConflictError; checked inside the
+   * write transaction, so no other write can slip between the check and the put.
+   */
+  base?: FiberType;
 }
 
 export type StoreStatus = 'open' | 'blocked' | 'closed-for-upgrade' | 'terminated' | 'closed';
@@ -332,32 +387,59 @@ export class FiberStore {
     return this.run(() => this.db.count('fiberTypes'));
   }
 
-  /** Validates and adds a new type; throws InvalidRecordError (nothing written) when a field is wrong. */
-  add(input: FiberTypeInput, nowMs = Date.now()): Promise<FiberType> {
+  /**
+   * Validates and adds a new type; throws InvalidRecordError (nothing written) when a field is wrong,
+   * and with `refuseSameName` NameClashError when another saved type has the same name.
+   */
+  add(input: FiberTypeInput, nowMs = Date.now(), opts: WriteOptions = {}): Promise<FiberType> {
     const v = validateInput(input);
     if (!v.ok) return Promise.reject(new InvalidRecordError(v.errors));
-    return this.write({ ...v.value, id: newFiberId(), createdAt: nowMs, updatedAt: nowMs, nameKey: '' }, 'add');
+    const record = { ...v.value, id: newFiberId(), createdAt: nowMs, updatedAt: nowMs, nameKey: '' };
+    if (!opts.refuseSameName) return this.write(record, 'add');
+    return this.run(async () => {
+      const rec = checked(record);
+      const tx = this.db.transaction('fiberTypes', 'readwrite');
+      try {
+        await refuseSameName(tx, rec);
+        await tx.store.add(rec);
+        await tx.done;
+      } catch (e) {
+        abortQuietly(tx);
+        await tx.done.catch(() => undefined);
+        throw causeOf(e, tx);
+      }
+      this.changed();
+      return rec;
+    });
   }
 
-  /** Validates and replaces the content of an existing type, keeping its id and creation time. */
-  update(id: string, input: FiberTypeInput, nowMs = Date.now()): Promise<FiberType> {
+  /**
+   * Validates and replaces the content of an existing type, keeping its id and creation time. The
+   * change time always moves forward (at least 1 ms past the saved one), so it identifies the version.
+   * With `base`, refuses (EditConflictError) when the saved record is no longer the version the edit
+   * started from; with `refuseSameName`, refuses a rename to a name another type has (NameClashError).
+   */
+  update(id: string, input: FiberTypeInput, nowMs = Date.now(), opts: UpdateOptions = {}): Promise<FiberType> {
     const v = validateInput(input);
     if (!v.ok) return Promise.reject(new InvalidRecordError(v.errors));
     return this.run(async () => {
       const tx = this.db.transaction('fiberTypes', 'readwrite');
-      const old = await tx.store.get(id);
-      if (!old) {
-        tx.abort();
-        await tx.done.catch(() => undefined);
-        throw new NotFoundError(id);
-      }
-      const rec = checked({ ...v.value, id, createdAt: old.createdAt, updatedAt: Math.max(nowMs, old.createdAt), nameKey: '' });
+      let rec: FiberType;
       try {
+        const old = await tx.store.get(id);
+        if (!old) throw new NotFoundError(id);
+        if (opts.base && (old.updatedAt !== opts.base.updatedAt || contentSignature(old) !== contentSignature(opts.base))) {
+          throw new EditConflictError(old, opts.base);
+        }
+        rec = checked({ ...v.value, id, createdAt: old.createdAt, updatedAt: Math.max(nowMs, old.createdAt, (Number.isFinite(old.updatedAt) ? old.updatedAt : 0) + 1), nameKey: '' });
+        // Only a rename is checked: an old pair of equal names is not raised again on every edit.
+        if (opts.refuseSameName && rec.nameKey !== old.nameKey) await refuseSameName(tx, rec);
         await tx.store.put(rec);
         await tx.done;
       } catch (e) {
-        // A failed request aborts its transaction; its done promise then rejects too, and must not go unhandled.
-        tx.done.catch(() => undefined);
+        // Refused or failed: abort so nothing of it lands; done then rejects too, and must not go unhandled.
+        abortQuietly(tx);
+        await tx.done.catch(() => undefined);
         throw causeOf(e, tx);
       }
       this.changed();
@@ -403,12 +485,13 @@ export class FiberStore {
    * Writes a whole import in ONE transaction: either every record lands, or (on any failure,
    * quota included) none does and the library is exactly as before.
    */
-  applyRecords(records: readonly FiberType[], mode: 'merge' | 'replace'): Promise<void> {
+  applyRecords(records: readonly FiberType[], mode: 'merge' | 'replace', deleteIds: readonly string[] = []): Promise<void> {
     return this.run(async () => {
       const recs = records.map(checked); // validate all before touching anything
       const tx = this.db.transaction('fiberTypes', 'readwrite');
       try {
         if (mode === 'replace') await tx.store.clear();
+        for (const id of deleteIds) await tx.store.delete(id);
         for (const r of recs) await tx.store.put(r);
         await tx.done;
       } catch (e) {
@@ -433,6 +516,23 @@ export class FiberStore {
     this.db.close();
     this.channel?.close();
   }
+}
+
+type WriteTx = IDBPTransaction<FiberDbSchema, ['fiberTypes'], 'readwrite'>;
+
+function abortQuietly(tx: WriteTx): void {
+  try {
+    tx.abort();
+  } catch {
+    // already finished or aborted by the failing request
+  }
+}
+
+/** Inside the write transaction: throws NameClashError when another record has rec's name. */
+async function refuseSameName(tx: WriteTx, rec: FiberType): Promise<void> {
+  const near = await tx.store.index('byNameKey').getAll(proposalRange(rec.nameKey));
+  const holder = near.find((r) => r.nameKey === rec.nameKey && r.id !== rec.id);
+  if (holder) throw new NameClashError(holder, proposeDistinctName(rec.name, new Set(near.map((r) => r.nameKey))));
 }
 
 function checked(record: FiberType): FiberType {
@@ -481,10 +581,10 @@ export interface PersistenceInfo {
 }
 
 const PERSIST_TEXT: Record<PersistenceState, string> = {
-  granted: 'Persistent storage is granted: the browser will not clear the library to free space.',
+  granted: 'The library is protected: this browser has granted persistent storage and will not clear the saved types to free space. A backup file is still the only copy that survives losing or resetting the phone.',
   'not-granted':
-    'Persistent storage is not granted: the browser may clear the library when the phone runs low on space. Export a backup now and then. Installing the app to the home screen often allows it.',
-  unsupported: 'This browser cannot promise to keep the library: export a backup now and then.',
+    'The library is not protected: this browser may clear the saved types when the phone runs low on space. Export a backup now and then. Installing the app to the home screen often lets the browser protect it.',
+  unsupported: 'This browser cannot say whether the library is protected from clean-up: export a backup now and then.',
 };
 
 type StorageLike = Pick<StorageManager, 'persist' | 'persisted'> & Partial<Pick<StorageManager, 'estimate'>>;

@@ -87,7 +87,7 @@ export const CONTENT_FIELDS = [
 /** A stable text of the content, for "same fiber under another id" duplicate detection. */
 export function contentSignature(f: FiberTypeInput): string {
   const parts = CONTENT_FIELDS.map((k) => {
-    const v = k === 'name' ? nameKeyOf(f.name) : f[k];
+    const v = k === 'name' && typeof f.name === 'string' ? nameKeyOf(f.name) : f[k]; // a damaged record may have no name
     return v === undefined ? null : v;
   });
   return JSON.stringify(parts);

@@ -3,7 +3,13 @@
 // replaced by an effective radius that accounts for the elastic-optic (stress) effect in bent silica
 // (Schermer & Cole 2007, IEEE JQE 43(10)). The correction is an explicit choice: it changes the answer
 // by more than ten times at a 15 mm radius, and the default follows the published comparison with
-// measurement, which found the corrected radius ≈ 1.28 R matches real fibers.
+// measurement, which found the stress-corrected radius matches real fibers.
+//
+// The factor, stated once: R_eff = 1.272 R for a silica core of index 1.449, from
+// R_eff/R = 1/(1 − (n²/2)(p12 − ν(p11 + p12))) with p11 = 0.121, p12 = 0.270, ν = 0.17 (Schermer & Cole 2007;
+// constants from memory). It is computed from the fiber's own core index (1.270–1.275 for n = 1.44–1.46).
+// A fiber type or the screen can choose another factor explicitly (BendFiber.radiusFactor), e.g. a figure
+// fitted to its own bend measurements.
 //
 // Trench-assisted and other bend-insensitive designs (ITU-T G.657) are not step-index fibers: they bend far
 // better than any step-index model predicts. For them the category limits, not this estimate, are what to use.
@@ -18,6 +24,14 @@ export const SILICA_P12 = 0.27;
 export const SILICA_POISSON_RATIO = 0.17;
 /** Default cladding index for a fiber given only by core radius and NA: fused silica at 1550 nm (Malitson 1965). */
 export const BEND_DEFAULT_CLADDING_INDEX = 1.444;
+/**
+ * R_eff/R for a silica core of index 1.449: 1/(1 − 1.0498 × (0.270 − 0.17 × 0.391)) = 1/(1 − 0.21367) = 1.2717
+ * (Schermer & Cole 2007 with the constants above). The number stated wherever the correction is described.
+ */
+export const STRESS_RADIUS_FACTOR_SILICA = 1.272;
+/** Range of an explicitly chosen R_eff/R: 1 (no correction) to 2 (far beyond any published figure). */
+export const MIN_RADIUS_FACTOR = 1;
+export const MAX_RADIUS_FACTOR = 2;
 /** Per-turn loss that defines the "critical radius" shown to the user (issue 4). */
 export const CRITICAL_LOSS_DB_PER_TURN = 0.1;
 /** LP11 cutoff, first zero of J0 (A&S Table 9.5). */
@@ -39,6 +53,11 @@ export interface BendFiber {
   na: number;
   /** Default BEND_DEFAULT_CLADDING_INDEX. */
   claddingIndex?: number;
+  /**
+   * R_eff/R chosen explicitly (1–2), for a fiber whose own bend measurements call for another factor. When given it
+   * replaces the radius model's factor (the result says so); when absent the radius model decides.
+   */
+  radiusFactor?: number;
 }
 
 export interface BendLossInput extends BendFiber {
@@ -60,14 +79,16 @@ export interface BendLossResult {
   effectiveRadiusMm: number;
   radiusFactor: number;
   radiusModel: BendRadiusModel;
+  /** True when radiusFactor was chosen by the caller (BendFiber.radiusFactor), not derived from the radius model. */
+  radiusFactorChosen: boolean;
   v: number;
   /** True if the fiber is not single-mode at this wavelength (V ≥ 2.405): LP11 also radiates, not included. */
   multimodeWarning: boolean;
 }
 
 /**
- * R_eff / R = 1 / (1 − (n²/2)(p12 − ν(p11 + p12))) ≈ 1.27–1.28 for silica (Schermer & Cole 2007, equivalent
- * bend radius; constants p11 = 0.121, p12 = 0.270, ν = 0.17 as used there). n: the core index.
+ * R_eff / R = 1 / (1 − (n²/2)(p12 − ν(p11 + p12))) (Schermer & Cole 2007, equivalent bend radius; constants
+ * p11 = 0.121, p12 = 0.270, ν = 0.17 as used there, from memory). n: the core index; 1.272 at n = 1.449.
  */
 export function stressRadiusFactor(coreIndex: number): number {
   const n = requireNumber('coreIndex', coreIndex, { min: 1, max: 2 });
@@ -120,7 +141,8 @@ function lnPowerLossPerUm(p: Prepared, radiusUm: number): number {
   );
 }
 
-function radiusFactorFor(model: BendRadiusModel, coreIndex: number): number {
+function radiusFactorFor(model: BendRadiusModel, coreIndex: number, chosen?: number): number {
+  if (chosen !== undefined) return requireNumber('radiusFactor', chosen, { min: MIN_RADIUS_FACTOR, max: MAX_RADIUS_FACTOR, hint: 'R_eff/R: 1 is no correction, silica ≈ 1.27' });
   if (model === 'geometric') return 1;
   if (model === 'stress-corrected') return stressRadiusFactor(coreIndex);
   throw new ModelError(`Unknown bend radius model "${String(model)}".`, 'bend radius model', "use 'stress-corrected' or 'geometric'");
@@ -141,7 +163,7 @@ export function bendLoss(input: BendLossInput): BendLossResult {
   const radius = requireNumber('bendRadiusMm', input.bendRadiusMm, { min: MIN_BEND_RADIUS_MM, max: MAX_BEND_RADIUS_MM, unit: 'mm' });
   const turns = requireInteger('turns', input.turns ?? 1, 1, 100000);
   const model = input.radiusModel ?? DEFAULT_BEND_RADIUS_MODEL;
-  const factor = radiusFactorFor(model, p.coreIndex);
+  const factor = radiusFactorFor(model, p.coreIndex, input.radiusFactor);
   const { lossDbPerM, lossDbPerTurn } = evaluate(p, radius, factor);
   return {
     lossDbPerTurn,
@@ -151,6 +173,7 @@ export function bendLoss(input: BendLossInput): BendLossResult {
     effectiveRadiusMm: radius * factor,
     radiusFactor: factor,
     radiusModel: model,
+    radiusFactorChosen: input.radiusFactor !== undefined,
     v: p.v,
     multimodeWarning: p.v >= FIRST_ZERO_J0,
   };
@@ -167,7 +190,7 @@ export function bendLossSweep(input: BendFiber & { wavelengthNm: number; minRadi
   const lo = requireNumber('minRadiusMm', input.minRadiusMm, { min: MIN_BEND_RADIUS_MM, max: MAX_BEND_RADIUS_MM, unit: 'mm' });
   const hi = requireNumber('maxRadiusMm', input.maxRadiusMm, { min: lo, max: MAX_BEND_RADIUS_MM, unit: 'mm' });
   const count = requireInteger('count', input.count, 2, 10000);
-  const factor = radiusFactorFor(input.radiusModel ?? DEFAULT_BEND_RADIUS_MODEL, p.coreIndex);
+  const factor = radiusFactorFor(input.radiusModel ?? DEFAULT_BEND_RADIUS_MODEL, p.coreIndex, input.radiusFactor);
   const out: BendSweepPoint[] = [];
   for (let i = 0; i < count; i++) {
     const r = lo + ((hi - lo) * i) / (count - 1);
@@ -188,7 +211,7 @@ export interface CriticalRadius {
 export function criticalBendRadius(input: BendFiber & { wavelengthNm: number; thresholdDbPerTurn?: number; radiusModel?: BendRadiusModel }): CriticalRadius {
   const p = prepare(input, input?.wavelengthNm);
   const threshold = requirePositive('thresholdDbPerTurn', input.thresholdDbPerTurn ?? CRITICAL_LOSS_DB_PER_TURN, { max: 100, unit: 'dB' });
-  const factor = radiusFactorFor(input.radiusModel ?? DEFAULT_BEND_RADIUS_MODEL, p.coreIndex);
+  const factor = radiusFactorFor(input.radiusModel ?? DEFAULT_BEND_RADIUS_MODEL, p.coreIndex, input.radiusFactor);
   const perTurn = (r: number) => evaluate(p, r, factor).lossDbPerTurn;
   if (perTurn(MIN_BEND_RADIUS_MM) <= threshold) return { bendRadiusMm: MIN_BEND_RADIUS_MM, thresholdDbPerTurn: threshold, status: 'below-range' };
   if (perTurn(MAX_BEND_RADIUS_MM) > threshold) {

@@ -8,7 +8,7 @@
 // (the integrand is odd in φ), so an offset in any direction couples to one orientation per LP mode. F_l is
 // computed by the trapezoid rule in φ, which is spectrally accurate for smooth periodic integrands
 // (Trefethen & Weideman 2014, SIAM Review 56(3)); for a Gaussian f it equals 2π e^{−(r²+d²)/w²} I_l(2rd/w²).
-import { InputError, ModelError, requireInteger, requireNumber, requirePositive } from './errors';
+import { InputError, ModelError, requireInteger, requireNumber, requirePositive, requireWavelengthNm } from './errors';
 import { vNumber } from './fiber';
 import { DB_PER_NEPER, lateralOffsetLossDb, MFD_MIN_UM, mfdMismatchLossDb } from './jointLoss';
 import { lpModes, solveLpMode } from './lpModes';
@@ -24,23 +24,47 @@ export interface RadialField {
   extentUm: number;
   /** ∫∫ f² dA = 2π ∫ f(ρ)² ρ dρ (µm²). */
   powerUm2: number;
-}
-
-/** Gaussian amplitude exp(−ρ²/w²), w = MFD/2 (Marcuse 1977). */
-export function gaussianRadialField(mfdUm: number): RadialField {
-  // MFD ≥ 0.1 µm as for the Gaussian joint formulas: a subnormal MFD gave w = 0 and a zero-size field.
-  const w = requireNumber('mfdUm', mfdUm, { min: MFD_MIN_UM, max: 100, unit: 'µm' }) / 2;
-  // exp(−2ρ²/w²) < 1e-16 for ρ > w √(8 ln 10 · 2)/2 ≈ 4.3 w.
-  const extentUm = w * Math.sqrt(8 * Math.LN10);
-  return { name: `Gaussian, MFD ${mfdUm} µm`, at: (rho) => Math.exp(-(rho * rho) / (w * w)), extentUm, powerUm2: (Math.PI * w * w) / 2 };
+  /**
+   * Wavelength the field belongs to (nm). A mode field depends on it, so a field is only ever overlapped with
+   * fields and modes of the same wavelength: anything else is refused with a ModelError.
+   */
+  wavelengthNm: number;
 }
 
 /**
- * A tabulated field on a uniform grid ρ_i = i·stepUm (linear interpolation, zero beyond the table).
- * Power by the trapezoid rule on the same table.
+ * Two wavelengths closer than this (nm) count as the same: they differ only by rounding of a converted entry
+ * (1.55 µm typed is 1550.0000000000002 nm). Any real difference changes the fields far more.
  */
-export function tabulatedRadialField(name: string, stepUm: number, values: ArrayLike<number>): RadialField {
+export const SAME_WAVELENGTH_TOLERANCE_NM = 1e-6;
+
+/** ModelError unless the two wavelengths agree: overlapping a field of one wavelength with modes of another is meaningless. */
+function requireSameWavelength(what: string, aNm: number, bNm: number): void {
+  if (!(Math.abs(aNm - bNm) <= SAME_WAVELENGTH_TOLERANCE_NM)) {
+    throw new ModelError(
+      `${what}: the single-mode field was computed for ${aNm} nm and the other for ${bNm} nm; an overlap needs both at one wavelength.`,
+      'overlap integral',
+      `compute both at the same wavelength`,
+    );
+  }
+}
+
+/** Gaussian amplitude exp(−ρ²/w²), w = MFD/2 (Marcuse 1977); `wavelengthNm` is the wavelength that MFD belongs to. */
+export function gaussianRadialField(mfdUm: number, wavelengthNm: number): RadialField {
+  // MFD ≥ 0.1 µm as for the Gaussian joint formulas: a subnormal MFD gave w = 0 and a zero-size field.
+  const w = requireNumber('mfdUm', mfdUm, { min: MFD_MIN_UM, max: 100, unit: 'µm' }) / 2;
+  const lambda = requireWavelengthNm('wavelengthNm', wavelengthNm);
+  // exp(−2ρ²/w²) < 1e-16 for ρ > w √(8 ln 10 · 2)/2 ≈ 4.3 w.
+  const extentUm = w * Math.sqrt(8 * Math.LN10);
+  return { name: `Gaussian, MFD ${mfdUm} µm`, at: (rho) => Math.exp(-(rho * rho) / (w * w)), extentUm, powerUm2: (Math.PI * w * w) / 2, wavelengthNm: lambda };
+}
+
+/**
+ * A tabulated field on a uniform grid ρ_i = i·stepUm (linear interpolation, zero beyond the table), measured or
+ * computed at `wavelengthNm`. Power by the trapezoid rule on the same table.
+ */
+export function tabulatedRadialField(name: string, stepUm: number, values: ArrayLike<number>, wavelengthNm: number): RadialField {
   const h = requirePositive('stepUm', stepUm, { max: MAX_TABLE_STEP_UM, unit: 'µm' });
+  const lambda = requireWavelengthNm('wavelengthNm', wavelengthNm);
   if (values === null || typeof values !== 'object' || typeof values.length !== 'number') throw new InputError('values', values, 'a list of field samples');
   const n = values.length;
   if (n < 3 || n > MAX_TABLE_SAMPLES) throw new InputError('values', n, `from 3 to ${MAX_TABLE_SAMPLES} samples`);
@@ -59,7 +83,8 @@ export function tabulatedRadialField(name: string, stepUm: number, values: Array
   if (!(power > 0) || !Number.isFinite(power)) throw new InputError('values', `power ${power}`, 'a field with a finite, non-zero power', 'the samples are too small or too large');
   const table = Float64Array.from(values);
   return {
-    name,
+    name: typeof name === 'string' ? name : 'tabulated field',
+    wavelengthNm: lambda,
     extentUm: Math.min((n - 1) * h, (last + 1) * h),
     powerUm2: 2 * Math.PI * power,
     at: (rho) => {
@@ -83,6 +108,7 @@ function requireRadialField(argument: string, f: unknown): RadialField {
   if (field === null || typeof field !== 'object' || typeof field.at !== 'function') throw new InputError(argument, f, 'a radial field (gaussianRadialField, tabulatedRadialField or lp01RadialField)');
   requirePositive(`${argument}.extentUm`, field.extentUm, { max: 1e6, unit: 'µm' });
   requirePositive(`${argument}.powerUm2`, field.powerUm2);
+  requireWavelengthNm(`${argument}.wavelengthNm`, field.wavelengthNm);
   return field;
 }
 
@@ -91,6 +117,7 @@ function requireModeSet(set: unknown): MultimodeModeSet {
   const s = set as MultimodeModeSet;
   if (s === null || typeof s !== 'object' || !ArrayBuffer.isView(s.rUm) || !Array.isArray(s.modes)) throw new InputError('modes', set, 'a mode set from multimodeModes');
   requirePositive('modes.stepUm', s.stepUm, { unit: 'µm' });
+  requireWavelengthNm('modes.wavelengthNm', s.wavelengthNm);
   for (const m of s.modes) {
     if (!m || !ArrayBuffer.isView(m.field) || m.field.length !== s.rUm.length || !Number.isInteger(m.l) || m.l < 0 || m.l > MAX_AZIMUTHAL_ORDER) {
       throw new InputError('modes.modes', m, 'modes sampled on the set’s own grid, as multimodeModes returns them');
@@ -110,6 +137,8 @@ export interface MultimodeFiberSpec {
 }
 
 export interface MultimodeModeSet {
+  /** Wavelength the modes were solved for (nm): a field of another wavelength is refused with a ModelError. */
+  wavelengthNm: number;
   /** Cell-centred radii (µm) on which every field is sampled. */
   rUm: Float64Array;
   stepUm: number;
@@ -159,6 +188,7 @@ export function multimodeModes(fiber: MultimodeFiberSpec, wavelengthNm: number, 
   const s = solveRadialModes(profile, wavelengthNm, exactStep ? { ...options, maxL: 0 } : options);
   if (!exactStep) {
     return {
+      wavelengthNm,
       rUm: s.rUm,
       stepUm: s.stepUm,
       v: s.v,
@@ -195,6 +225,7 @@ export function multimodeModes(fiber: MultimodeFiberSpec, wavelengthNm: number, 
     return { l: mode.l, m: mode.m, b: mode.b, principal: 2 * mode.m + mode.l - 1, degeneracy: mode.degeneracy, field };
   });
   return {
+    wavelengthNm,
     rUm: s.rUm,
     stepUm: s.stepUm,
     v: s.v,
@@ -315,6 +346,7 @@ export const POWER_SHARE_FOR_MODE_COUNT = 0.9;
 function overlapFractions(f: RadialField, set: MultimodeModeSet, offsetUm: number): number[] {
   requireRadialField('field', f);
   requireModeSet(set);
+  requireSameWavelength('Launch between single-mode and multimode fibers', f.wavelengthNm, set.wavelengthNm);
   const lMax = set.modes.reduce((mx, m) => Math.max(mx, m.l), 0);
   const { coefficients: coeff, ringPower } = azimuthalCoefficients(f, set.rUm, offsetUm, lMax);
   // The field's power by the same quadrature as the overlaps: then the discrete modes, orthonormal on this
@@ -445,6 +477,7 @@ export function fieldOverlapLoss(f1: RadialField, f2: RadialField, offsetUm: num
   const d = requireNumber('offsetUm', offsetUm, { min: 0, max: MAX_LAUNCH_OFFSET_UM, unit: 'µm' });
   requireRadialField('f1', f1);
   requireRadialField('f2', f2);
+  requireSameWavelength('Overlap of two single-mode fields', f1.wavelengthNm, f2.wavelengthNm);
   // One midpoint grid, fine against the narrower field, out to where both fields vanish. The powers are
   // taken with the same rule as the overlap so that the quadrature error cancels (identical fields give 1).
   const extent = Math.max(f1.extentUm, f2.extentUm);
@@ -534,7 +567,7 @@ export function lp01RadialField(fiber: StepFiber, wavelengthNm: number): RadialF
   let power = 0;
   for (let i = 1; i < core.length; i++) power += 0.5 * h1 * (core[i - 1] ** 2 * (i - 1) * h1 + core[i] ** 2 * i * h1);
   for (let i = 1; i < nClad; i++) power += 0.5 * h2 * (clad[i - 1] ** 2 * (a + (i - 1) * h2) + clad[i] ** 2 * (a + i * h2));
-  return { name: `exact LP01, V = ${v.toFixed(3)}`, at, extentUm, powerUm2: 2 * Math.PI * power };
+  return { name: `exact LP01, V = ${v.toFixed(3)}`, at, extentUm, powerUm2: 2 * Math.PI * power, wavelengthNm };
 }
 
 export interface JointComparison {

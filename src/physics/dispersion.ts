@@ -22,6 +22,7 @@ import {
   germaniaFractionForNa,
   MAX_GERMANIA_FRACTION,
   refractiveIndexDerivatives,
+  type SellmeierGlass,
 } from './materials';
 
 /** Speed of light in vacuum, m/s (SI definition). */
@@ -31,6 +32,20 @@ export const SPEED_OF_LIGHT_M_PER_S = 299_792_458;
 const PS_PER_NM_KM_FACTOR = 1e12 / SPEED_OF_LIGHT_M_PER_S;
 
 const NM_PER_UM = 1000;
+
+/**
+ * Material dispersion of one glass: D_M(λ) = −(λ/c)·d²n/dλ², ps/(nm·km) (Gloge 1971; the definition of group-delay
+ * dispersion per unit length, with n″ analytic from the Sellmeier sum, materials.ts). For fused silica (Malitson 1965)
+ * it crosses zero near 1.27 µm and is about +21.9 ps/(nm·km) at 1550 nm.
+ */
+export function materialDispersionPsPerNmKm(input: { glass: SellmeierGlass; wavelengthNm: number }): number {
+  if (input === null || typeof input !== 'object') throw new InputError('input', input, 'an object with glass and wavelengthNm');
+  const d = refractiveIndexDerivatives(input.glass, input.wavelengthNm);
+  const lamUm = input.wavelengthNm / NM_PER_UM;
+  const dM = -lamUm * d.d2nPerUm2 * PS_PER_NM_KM_FACTOR;
+  if (!Number.isFinite(dM)) throw new ModelError(`The material dispersion of ${input.glass.name} overflows at ${input.wavelengthNm} nm.`, `Sellmeier (${input.glass.source})`);
+  return dM;
+}
 
 /** A step-index single-mode fiber model: GeO₂-doped silica core of radius a, pure silica cladding. */
 export interface DispersionFiber {
@@ -162,6 +177,7 @@ export function chromaticDispersion(fiber: DispersionFiber, wavelengthNm: number
   const nEffPP = spp / (2 * nEff) - (sp * sp) / (4 * nEff * nEff * nEff);
 
   const total = -lam * nEffPP * PS_PER_NM_KM_FACTOR;
+  // The glass the mode sees, at fixed b: n_m = n₂ + b·(n₁ − n₂), so D_M = (1 − b)·D_M(cladding) + b·D_M(core).
   const material = -lam * (n2pp + b * (n1pp - n2pp)) * PS_PER_NM_KM_FACTOR;
   const delta = (n1 - n2) / n1;
   const n2Group = n2 - lam * n2p;

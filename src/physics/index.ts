@@ -18,6 +18,7 @@ export * from './bending';
 export * from './modeField';
 export * from './singleMode';
 export * from './equivalentStepIndex';
+export * from './equipmentBudget';
 export * from './attenuationSpectrum';
 export * from './ponBudget';
 export * from './wdmGrid';

@@ -52,7 +52,10 @@ export interface GaussianJointInput {
   gapUm?: number;
   /** Index of what fills the gap: INDEX_AIR or INDEX_MATCHING_GEL. Default air. */
   mediumIndex?: number;
-  /** Index of the fiber glass at the end faces, for the Fresnel loss of a gap. Default SILICA_INDEX_1550NM. */
+  /**
+   * Index of the fiber glass at the end faces. Used for the Fresnel loss of a gap, and for the tilt term when
+   * there is no gap (gapUm = 0: glass on both sides, so the tilt phase builds up in glass). Default SILICA_INDEX_1550NM.
+   */
   fiberIndex?: number;
 }
 
@@ -109,8 +112,25 @@ interface Normalised {
   gap: number;
   medium: number;
   fiber: number;
-  /** k in the gap medium (rad/µm). */
+  /** k in the gap medium (rad/µm): diffraction across the gap. */
   k: number;
+  /**
+   * k of whatever the tilted wavefront crosses (rad/µm): the gap medium when there is a gap, the glass when
+   * the faces touch (a fusion splice or physical contact has no air in the light's path).
+   */
+  kTilt: number;
+}
+
+/**
+ * Index the tilt term uses: the glass when the faces touch (gap 0), the gap medium otherwise. The tilt phase
+ * k·θ·x is set by the medium in which the two tilted wavefronts meet (Marcuse 1977, tilt formula with n the
+ * index of that medium); with no gap that medium is the fiber glass.
+ */
+export function tiltMediumIndex(input: { gapUm?: number; mediumIndex?: number; fiberIndex?: number }): number {
+  const gap = requireNumber('gapUm', input?.gapUm ?? 0, { min: 0, max: MAX_GAP_UM, unit: 'µm' });
+  const medium = requireNumber('mediumIndex', input?.mediumIndex ?? INDEX_AIR, { min: 1, max: 2 });
+  const fiber = requireNumber('fiberIndex', input?.fiberIndex ?? SILICA_INDEX_1550NM, { min: 1, max: 2 });
+  return gap > 0 ? medium : fiber;
 }
 
 function normalise(input: GaussianJointInput): Normalised {
@@ -124,7 +144,18 @@ function normalise(input: GaussianJointInput): Normalised {
   const medium = requireNumber('mediumIndex', input.mediumIndex ?? INDEX_AIR, { min: 1, max: 2 });
   const fiber = requireNumber('fiberIndex', input.fiberIndex ?? SILICA_INDEX_1550NM, { min: 1, max: 2 });
   const lambdaUm = lambdaNm / 1000;
-  return { w1: mfd1 / 2, w2: mfd2 / 2, d, thetaRad: tilt * RAD_PER_DEG, gap, medium, fiber, k: (2 * Math.PI * medium) / lambdaUm };
+  const tiltIndex = gap > 0 ? medium : fiber;
+  return {
+    w1: mfd1 / 2,
+    w2: mfd2 / 2,
+    d,
+    thetaRad: tilt * RAD_PER_DEG,
+    gap,
+    medium,
+    fiber,
+    k: (2 * Math.PI * medium) / lambdaUm,
+    kTilt: (2 * Math.PI * tiltIndex) / lambdaUm,
+  };
 }
 
 /**
@@ -141,12 +172,13 @@ function lnGaussianCoupling(p: Normalised): number {
   const a1Re = 1 / den;
   const a1Im = t / den;
   const c2 = 1 / (p.w2 * p.w2);
-  // A = a1 + 1/w2² (complex), B = 2d/w2² + i kθ, C = −d²/w2².
+  // A = a1 + 1/w2² (complex), B = 2d/w2² + i kθ, C = −d²/w2². With a gap, kTilt = k (the gap medium); without
+  // one the gap terms vanish (t = 0) and kTilt is the glass's.
   const aRe = a1Re + c2;
   const aIm = a1Im;
   const aAbs = Math.hypot(aRe, aIm);
   const bRe = 2 * p.d * c2;
-  const bIm = p.k * p.thetaRad;
+  const bIm = p.kTilt * p.thetaRad;
   // B²/(4A): B² = (bRe² − bIm²) + 2i bRe bIm; divide by 4A.
   const b2Re = bRe * bRe - bIm * bIm;
   const b2Im = 2 * bRe * bIm;
@@ -179,14 +211,17 @@ export function lateralOffsetLossDb(mfd1Um: number, mfd2Um: number, lateralOffse
 }
 
 /**
- * Tilt alone (the mismatch factor kept apart): T = exp(−k² θ² w1² w2² / (2 (w1² + w2²))), k = 2π n/λ in the gap medium; for equal fields
- * exp(−(π n w θ/λ)²) (Marcuse 1977, BSTJ 56(5), tilt formula; paraxial, θ ≲ 10°).
+ * Tilt alone (the mismatch factor kept apart): T = exp(−k² θ² w1² w2² / (2 (w1² + w2²))), k = 2π n/λ with n the
+ * index of the medium the tilted fields meet in; for equal fields exp(−(π n w θ/λ)²) (Marcuse 1977, BSTJ 56(5),
+ * tilt formula; paraxial, θ ≲ 10°). With no gap that medium is the glass: the default is SILICA_INDEX_1550NM;
+ * pass tiltMediumIndex(…) for a joint with a gap.
  */
-export function tiltLossDb(mfd1Um: number, mfd2Um: number, tiltDeg: number, wavelengthNm: number, mediumIndex: number = INDEX_AIR): number {
-  const p = normalise({ mfd1Um, mfd2Um, tiltDeg, wavelengthNm, mediumIndex });
+export function tiltLossDb(mfd1Um: number, mfd2Um: number, tiltDeg: number, wavelengthNm: number, mediumIndex: number = SILICA_INDEX_1550NM): number {
+  // No gap here: the medium given is the one the tilt happens in, passed as the "fiber" index of a touching joint.
+  const p = normalise({ mfd1Um, mfd2Um, tiltDeg, wavelengthNm, fiberIndex: mediumIndex });
   const w1s = p.w1 * p.w1;
   const w2s = p.w2 * p.w2;
-  return lossFromLn(-(p.k * p.k * p.thetaRad * p.thetaRad * w1s * w2s) / (2 * (w1s + w2s)));
+  return lossFromLn(-(p.kTilt * p.kTilt * p.thetaRad * p.thetaRad * w1s * w2s) / (2 * (w1s + w2s)));
 }
 
 /**
@@ -208,6 +243,7 @@ export function endGapLossDb(mfd1Um: number, mfd2Um: number, gapUm: number, wave
 export function gaussianJointLoss(input: GaussianJointInput): JointLossResult {
   const p = normalise(input);
   const couplingLossDb = lossFromLn(lnGaussianCoupling(p));
+  const tiltIndex = p.gap > 0 ? p.medium : p.fiber;
   const mfd1Um = 2 * p.w1;
   const mfd2Um = 2 * p.w2;
   const wavelengthNm = input.wavelengthNm;
@@ -215,7 +251,7 @@ export function gaussianJointLoss(input: GaussianJointInput): JointLossResult {
   const contributions: Record<JointCause, number> = {
     mismatch: mfdMismatchLossDb(mfd1Um, mfd2Um),
     offset: lateralOffsetLossDb(mfd1Um, mfd2Um, p.d),
-    tilt: tiltLossDb(mfd1Um, mfd2Um, p.thetaRad / RAD_PER_DEG, wavelengthNm, p.medium),
+    tilt: tiltLossDb(mfd1Um, mfd2Um, p.thetaRad / RAD_PER_DEG, wavelengthNm, tiltIndex),
     gap: endGapLossDb(mfd1Um, mfd2Um, p.gap, wavelengthNm, p.medium),
     fresnel: fresnelDb,
   };

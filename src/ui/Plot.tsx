@@ -1,5 +1,12 @@
 // Small SVG plots of our own. Series differ by dash pattern and marker shape as well as
 // colour, so a grey printout and a colour-blind reader see the same thing.
+//
+// The drawing is laid out for the width it is shown at: the SVG's viewBox is as wide, in user
+// units, as the figure is in CSS pixels, so text drawn at 13 px is 13 px on a phone and on a
+// laptop alike (a fixed viewBox would shrink it to 6 px on a 360 px phone). Margins are sized from
+// the tick labels actually drawn, and long axis labels take two lines, so nothing is clipped.
+import type { RefObject } from 'preact';
+import { useLayoutEffect, useRef, useState } from 'preact/hooks';
 import { formatNumber } from './format';
 import { niceTicks } from './ticks';
 
@@ -34,10 +41,122 @@ export interface LinePlotProps {
   yRange?: [number, number];
 }
 
-const W = 640;
-const H = 360;
-const PAD = { left: 64, right: 16, top: 16, bottom: 52 };
+/** Width drawn before the figure has been measured (and in a test without layout). */
+const DEFAULT_W = 640;
+/** Narrowest and widest drawings: below this a phone scrolls, above it the plot stops growing. */
+const MIN_W = 240;
+const MAX_W = 760;
+/** Font sizes (CSS px, = user units), the same as in styles.css (.plot-tick, .plot-label). */
+export const PLOT_TICK_PX = 13;
+export const PLOT_LABEL_PX = 14;
+/** Average glyph advance as a share of the font size, generous, for sizing margins: ticks (digits ≈ 0.55) and bold labels. */
+const TICK_EM = 0.62;
+const LABEL_EM = 0.68;
 const DASHES = ['', '8 5', '2 4', '12 4 2 4', '4 4'];
+
+const textWidth = (s: string, px: number) => s.length * px * (px >= PLOT_LABEL_PX ? LABEL_EM : TICK_EM);
+/** Centre of a text `width` wide, moved only as far as needed to keep it inside 0…W. */
+const keepInside = (centre: number, width: number, W: number) => Math.min(Math.max(centre, width / 2 + 2), W - width / 2 - 2);
+
+/** The figure's content width in CSS pixels, followed as the window or the layout changes. */
+function useFigureWidth(): [RefObject<HTMLElement>, number] {
+  const ref = useRef<HTMLElement>(null);
+  const [width, setWidth] = useState(DEFAULT_W);
+  useLayoutEffect(() => {
+    const el = ref.current;
+    if (!el) return;
+    const measure = () => {
+      const w = Math.round(el.clientWidth);
+      if (w > 0) setWidth(Math.min(MAX_W, Math.max(MIN_W, w)));
+    };
+    measure();
+    if (typeof ResizeObserver === 'undefined') return;
+    const ro = new ResizeObserver(measure);
+    ro.observe(el);
+    return () => ro.disconnect();
+  }, []);
+  return [ref, width];
+}
+
+/** An axis label in one line, or two when it is wider than the room it has. */
+function splitLabel(label: string, room: number): string[] {
+  if (textWidth(label, PLOT_LABEL_PX) <= room) return [label];
+  const mid = label.length / 2;
+  let best = -1;
+  for (let i = 0; i < label.length; i++) if (label[i] === ' ' && (best < 0 || Math.abs(i - mid) < Math.abs(best - mid))) best = i;
+  return best < 0 ? [label] : [label.slice(0, best), label.slice(best + 1)];
+}
+
+/** Tick text: a decade on a log axis is written 10⁻⁶, short enough for a phone. */
+const SUPERSCRIPT: Record<string, string> = { '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹' };
+export function tickText(v: number, log?: boolean): string {
+  if (log && v > 0) {
+    const k = Math.round(Math.log10(v));
+    if (Math.abs(v / 10 ** k - 1) < 1e-9 && (k < -2 || k > 4)) return `10${String(k).replace(/./g, (c) => SUPERSCRIPT[c] ?? c)}`;
+  }
+  return formatNumber(v, 3);
+}
+
+/** Linear ticks thinned until their labels fit side by side along `room` pixels. */
+function fittingTicks(lo: number, hi: number, want: number, log: boolean | undefined, room: number, fmt: (v: number) => string): number[] {
+  for (let n = want; n >= 2; n--) {
+    const ticks = niceTicks(lo, hi, n, log);
+    const widest = Math.max(0, ...ticks.map((t) => textWidth(fmt(t), PLOT_TICK_PX)));
+    if (ticks.length <= 1 || (ticks.length * (widest + 10) <= room)) return ticks;
+  }
+  const ticks = niceTicks(lo, hi, 2, log);
+  return ticks.length > 2 ? [ticks[0]!, ticks[ticks.length - 1]!] : ticks;
+}
+
+interface Frame {
+  W: number;
+  H: number;
+  pad: { left: number; right: number; top: number; bottom: number };
+  xLines: string[];
+  yLines: string[];
+}
+
+/** Margins and height for a drawing `W` wide whose y tick labels are `yTickTexts`. */
+function frameFor(W: number, xLabel: string, yLabel: string, yTickTexts: string[], lastXTickText: string): Frame {
+  const widestYTick = Math.max(10, ...yTickTexts.map((t) => textWidth(t, PLOT_TICK_PX)));
+  const right = Math.ceil(Math.max(12, textWidth(lastXTickText, PLOT_TICK_PX) / 2 + 4));
+  const xLines = splitLabel(xLabel, W - 8);
+  const top = 12;
+  const bottom = 8 + PLOT_TICK_PX + 8 + xLines.length * (PLOT_LABEL_PX + 4) + 2;
+  let H = Math.round(Math.min(380, Math.max(260, W * 0.62)));
+  // The rotated y label runs along the plot's height: two lines if it would not fit in one,
+  // and a taller plot if even two would not.
+  let yLines = splitLabel(yLabel, H - top - bottom - 8);
+  const need = Math.max(...yLines.map((l) => textWidth(l, PLOT_LABEL_PX))) + 8;
+  if (need > H - top - bottom) {
+    H = Math.ceil(need + top + bottom);
+    yLines = splitLabel(yLabel, H - top - bottom - 8);
+  }
+  const left = Math.ceil(yLines.length * (PLOT_LABEL_PX + 4) + 8 + widestYTick + 6);
+  return { W, H, pad: { left, right, top, bottom }, xLines, yLines };
+}
+
+/** The two axis labels: x under the ticks, y rotated along the left edge. */
+function AxisLabels({ f }: { f: Frame }) {
+  const { W, H, pad, xLines, yLines } = f;
+  const cx = keepInside((pad.left + W - pad.right) / 2, Math.max(...xLines.map((l) => textWidth(l, PLOT_LABEL_PX))), W);
+  const cy = keepInside((pad.top + H - pad.bottom) / 2, Math.max(...yLines.map((l) => textWidth(l, PLOT_LABEL_PX))), H);
+  const xFirst = H - 6 - (xLines.length - 1) * (PLOT_LABEL_PX + 4);
+  return (
+    <>
+      <text x={cx} y={xFirst} text-anchor="middle" class="plot-label">
+        {xLines.map((l, i) => (
+          <tspan key={i} x={cx} dy={i === 0 ? 0 : PLOT_LABEL_PX + 4}>{l}</tspan>
+        ))}
+      </text>
+      <text x={PLOT_LABEL_PX + 2} y={cy} text-anchor="middle" class="plot-label" transform={`rotate(-90 ${PLOT_LABEL_PX + 2} ${cy})`}>
+        {yLines.map((l, i) => (
+          <tspan key={i} x={PLOT_LABEL_PX + 2} dy={i === 0 ? 0 : PLOT_LABEL_PX + 4}>{l}</tspan>
+        ))}
+      </text>
+    </>
+  );
+}
 
 function finitePoints(s: Series, logX?: boolean, logY?: boolean): [number, number][] {
   return s.points.filter(([x, y]) => Number.isFinite(x) && Number.isFinite(y) && (!logX || x > 0) && (!logY || y > 0));
@@ -55,44 +174,60 @@ function extent(values: number[], fallback: [number, number]): [number, number] 
   return [lo, hi];
 }
 
+/** A label beside a point or marker line, on whichever side keeps it inside the drawing. */
+function sideLabel(x: number, label: string, f: Frame, px: number): { x: number; anchor: 'start' | 'end' } {
+  const w = textWidth(label, px);
+  return x + 4 + w <= f.W - 2 ? { x: x + 4, anchor: 'start' } : { x: Math.max(w + 2, x - 4), anchor: 'end' };
+}
+
 /** A line plot with labelled axes, legend, optional vertical markers and labelled points. */
 export function LinePlot({ title, xLabel, yLabel, series, markers = [], points = [], logX, logY, xRange, yRange }: LinePlotProps) {
+  const [ref, W] = useFigureWidth();
   const clean = series.map((s) => ({ ...s, points: finitePoints(s, logX, logY) }));
   const all = clean.flatMap((s) => s.points);
   const tx = (v: number) => (logX ? Math.log10(v) : v);
   const ty = (v: number) => (logY ? Math.log10(v) : v);
   const [x0, x1] = xRange ? [tx(xRange[0]), tx(xRange[1])] : extent(all.map((p) => tx(p[0])), [0, 1]);
   const [y0, y1] = yRange ? [ty(yRange[0]), ty(yRange[1])] : extent(all.map((p) => ty(p[1])), [0, 1]);
-  const px = (v: number) => PAD.left + ((tx(v) - x0) / (x1 - x0)) * (W - PAD.left - PAD.right);
-  const py = (v: number) => H - PAD.bottom - ((ty(v) - y0) / (y1 - y0)) * (H - PAD.top - PAD.bottom);
-  const xTicks = niceTicks(x0, x1, 6, logX);
   const yTicks = niceTicks(y0, y1, 5, logY);
+  const yTexts = yTicks.map((t) => tickText(t, logY));
+  // First pass with a guessed right margin, to know how much room the x ticks have.
+  const guess = frameFor(W, xLabel, yLabel, yTexts, '');
+  const xTicks = fittingTicks(x0, x1, 6, logX, W - guess.pad.left - guess.pad.right, (t) => tickText(t, logX));
+  const f = frameFor(W, xLabel, yLabel, yTexts, xTicks.length ? tickText(xTicks[xTicks.length - 1]!, logX) : '');
+  const { H, pad } = f;
+  const px = (v: number) => pad.left + ((tx(v) - x0) / (x1 - x0)) * (W - pad.left - pad.right);
+  const py = (v: number) => H - pad.bottom - ((ty(v) - y0) / (y1 - y0)) * (H - pad.top - pad.bottom);
   const inX = (v: number) => tx(v) >= x0 && tx(v) <= x1;
   const inY = (v: number) => ty(v) >= y0 && ty(v) <= y1;
   return (
-    <figure class="plot">
+    <figure class="plot" ref={ref}>
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={`${title}. ${yLabel} against ${xLabel}.`} preserveAspectRatio="xMidYMid meet">
-        <rect x={PAD.left} y={PAD.top} width={W - PAD.left - PAD.right} height={H - PAD.top - PAD.bottom} class="plot-area" />
+        <rect x={pad.left} y={pad.top} width={W - pad.left - pad.right} height={H - pad.top - pad.bottom} class="plot-area" />
         {xTicks.map((t) => (
           <g key={`x${t}`}>
-            <line x1={px(t)} x2={px(t)} y1={PAD.top} y2={H - PAD.bottom} class="plot-grid" />
-            <text x={px(t)} y={H - PAD.bottom + 18} text-anchor="middle" class="plot-tick">{formatNumber(t, 3)}</text>
+            <line x1={px(t)} x2={px(t)} y1={pad.top} y2={H - pad.bottom} class="plot-grid" />
+            <text x={keepInside(px(t), textWidth(tickText(t, logX), PLOT_TICK_PX), W)} y={H - pad.bottom + 8 + PLOT_TICK_PX} text-anchor="middle" class="plot-tick">
+              {tickText(t, logX)}
+            </text>
           </g>
         ))}
-        {yTicks.map((t) => (
+        {yTicks.map((t, i) => (
           <g key={`y${t}`}>
-            <line x1={PAD.left} x2={W - PAD.right} y1={py(t)} y2={py(t)} class="plot-grid" />
-            <text x={PAD.left - 6} y={py(t) + 5} text-anchor="end" class="plot-tick">{formatNumber(t, 3)}</text>
+            <line x1={pad.left} x2={W - pad.right} y1={py(t)} y2={py(t)} class="plot-grid" />
+            <text x={pad.left - 6} y={py(t) + PLOT_TICK_PX * 0.35} text-anchor="end" class="plot-tick">{yTexts[i]}</text>
           </g>
         ))}
-        <text x={(PAD.left + W - PAD.right) / 2} y={H - 8} text-anchor="middle" class="plot-label">{xLabel}</text>
-        <text x={14} y={(PAD.top + H - PAD.bottom) / 2} text-anchor="middle" class="plot-label" transform={`rotate(-90 14 ${(PAD.top + H - PAD.bottom) / 2})`}>{yLabel}</text>
-        {markers.filter((m) => inX(m.x)).map((m, i) => (
-          <g key={`m${i}`}>
-            <line x1={px(m.x)} x2={px(m.x)} y1={PAD.top} y2={H - PAD.bottom} class="plot-marker" />
-            <text x={px(m.x) + 4} y={PAD.top + 14 + (i % 3) * 14} class="plot-marker-label">{m.label}</text>
-          </g>
-        ))}
+        <AxisLabels f={f} />
+        {markers.filter((m) => inX(m.x)).map((m, i) => {
+          const at = sideLabel(px(m.x), m.label, f, PLOT_TICK_PX);
+          return (
+            <g key={`m${i}`}>
+              <line x1={px(m.x)} x2={px(m.x)} y1={pad.top} y2={H - pad.bottom} class="plot-marker" />
+              <text x={at.x} y={pad.top + PLOT_TICK_PX + 2 + (i % 3) * (PLOT_TICK_PX + 3)} text-anchor={at.anchor} class="plot-marker-label">{m.label}</text>
+            </g>
+          );
+        })}
         {clean.map((s, i) =>
           s.points.length > 1 ? (
             <polyline
@@ -103,12 +238,15 @@ export function LinePlot({ title, xLabel, yLabel, series, markers = [], points =
             />
           ) : null,
         )}
-        {points.filter((p) => inX(p.x) && inY(p.y)).map((p, i) => (
-          <g key={`p${i}`}>
-            <circle cx={px(p.x)} cy={py(p.y)} r={6} class="plot-point" />
-            <text x={px(p.x) + 9} y={py(p.y) - 8} class="plot-point-label">{p.label}</text>
-          </g>
-        ))}
+        {points.filter((p) => inX(p.x) && inY(p.y)).map((p, i) => {
+          const at = sideLabel(px(p.x) + 5, p.label, f, PLOT_TICK_PX);
+          return (
+            <g key={`p${i}`}>
+              <circle cx={px(p.x)} cy={py(p.y)} r={6} class="plot-point" />
+              <text x={at.x} y={Math.max(pad.top + PLOT_TICK_PX, py(p.y) - 8)} text-anchor={at.anchor} class="plot-point-label">{p.label}</text>
+            </g>
+          );
+        })}
       </svg>
       <figcaption>
         <span class="plot-title">{title}</span>
@@ -143,40 +281,52 @@ export interface BarChartProps {
   formatValue?: (v: number) => string;
 }
 
-/** Vertical bars with the value written on each, so the numbers survive a grey printout. */
+/** Vertical bars with the value written on each where it fits, so the numbers survive a grey printout. */
 export function BarChart({ title, xLabel, yLabel, bars, formatValue = (v) => formatNumber(v, 3) }: BarChartProps) {
+  const [ref, W] = useFigureWidth();
   const clean = bars.filter((b) => Number.isFinite(b.value));
   const maxV = Math.max(1e-12, ...clean.map((b) => b.value));
   const yTicks = niceTicks(0, maxV, 5, false);
   const top = Math.max(maxV, yTicks[yTicks.length - 1] ?? maxV);
-  const plotW = W - PAD.left - PAD.right;
+  const f = frameFor(W, xLabel, yLabel, yTicks.map(formatValue), '');
+  const { H, pad } = f;
+  const plotW = W - pad.left - pad.right;
   const slot = plotW / Math.max(1, clean.length);
-  const py = (v: number) => H - PAD.bottom - (v / top) * (H - PAD.top - PAD.bottom);
-  const labelEvery = Math.max(1, Math.ceil(clean.length / 16));
+  const py = (v: number) => H - pad.bottom - (v / top) * (H - pad.top - pad.bottom);
+  const widestLabel = Math.max(1, ...clean.map((b) => textWidth(b.label, PLOT_TICK_PX)));
+  const labelEvery = Math.max(1, Math.ceil((widestLabel + 6) / slot));
   return (
-    <figure class="plot">
+    <figure class="plot" ref={ref}>
       <svg viewBox={`0 0 ${W} ${H}`} role="img" aria-label={`${title}. ${yLabel} for each ${xLabel}.`}>
-        <rect x={PAD.left} y={PAD.top} width={plotW} height={H - PAD.top - PAD.bottom} class="plot-area" />
+        <rect x={pad.left} y={pad.top} width={plotW} height={H - pad.top - pad.bottom} class="plot-area" />
         {yTicks.map((t) => (
           <g key={`y${t}`}>
-            <line x1={PAD.left} x2={W - PAD.right} y1={py(t)} y2={py(t)} class="plot-grid" />
-            <text x={PAD.left - 6} y={py(t) + 5} text-anchor="end" class="plot-tick">{formatValue(t)}</text>
+            <line x1={pad.left} x2={W - pad.right} y1={py(t)} y2={py(t)} class="plot-grid" />
+            <text x={pad.left - 6} y={py(t) + PLOT_TICK_PX * 0.35} text-anchor="end" class="plot-tick">{formatValue(t)}</text>
           </g>
         ))}
         {clean.map((b, i) => {
-          const x = PAD.left + i * slot + slot * 0.15;
+          const x = pad.left + i * slot + slot * 0.15;
           const w = slot * 0.7;
+          const value = formatValue(b.value);
           return (
             <g key={`${b.label}-${i}`}>
-              <rect x={x} y={py(b.value)} width={w} height={Math.max(0, H - PAD.bottom - py(b.value))} class="plot-bar" />
-              {/* A value label is written only where it fits its slot (about 8.5 px a character at 15 px). */}
-              {formatValue(b.value).length * 8.5 <= slot && <text x={x + w / 2} y={py(b.value) - 4} text-anchor="middle" class="plot-tick">{formatValue(b.value)}</text>}
-              {i % labelEvery === 0 && <text x={x + w / 2} y={H - PAD.bottom + 18} text-anchor="middle" class="plot-tick">{b.label}</text>}
+              <rect x={x} y={py(b.value)} width={w} height={Math.max(0, H - pad.bottom - py(b.value))} class="plot-bar" />
+              {/* A value is written on its bar only where it fits the bar's slot. */}
+              {textWidth(value, PLOT_TICK_PX) + 2 <= slot && (
+                <text x={keepInside(x + w / 2, textWidth(value, PLOT_TICK_PX), W)} y={Math.max(pad.top + PLOT_TICK_PX, py(b.value) - 4)} text-anchor="middle" class="plot-tick">
+                  {value}
+                </text>
+              )}
+              {i % labelEvery === 0 && (
+                <text x={keepInside(x + w / 2, textWidth(b.label, PLOT_TICK_PX), W)} y={H - pad.bottom + 8 + PLOT_TICK_PX} text-anchor="middle" class="plot-tick">
+                  {b.label}
+                </text>
+              )}
             </g>
           );
         })}
-        <text x={(PAD.left + W - PAD.right) / 2} y={H - 8} text-anchor="middle" class="plot-label">{xLabel}</text>
-        <text x={14} y={(PAD.top + H - PAD.bottom) / 2} text-anchor="middle" class="plot-label" transform={`rotate(-90 14 ${(PAD.top + H - PAD.bottom) / 2})`}>{yLabel}</text>
+        <AxisLabels f={f} />
       </svg>
       <figcaption><span class="plot-title">{title}</span></figcaption>
     </figure>

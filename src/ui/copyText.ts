@@ -25,5 +25,6 @@ export function reportText(spec: ReportSpec): string {
   }
   lines.push('', `Computed ${date} with Modewright ${APP_VERSION} (build ${APP_BUILD}).`);
   lines.push('Laser safety: never look into a fiber end or connector; follow your site’s laser-safety rules and local codes.');
-  return lines.join('\n');
+  // Plain text pastes anywhere: the no-break spaces that keep numbers whole on screen become spaces.
+  return lines.join('\n').replace(/[\u00a0\u202f]/g, ' ');
 }

@@ -8,8 +8,11 @@ import { options } from 'preact';
 const UNITS = ['dB/km', 'dBm', 'dB', 'nm', 'µm', 'μm', 'um', 'mm', 'cm', 'km', 'm', 'mW', 'µW', 'nW', 'W', 'THz', 'GHz', 'MHz', 'ps/√km', 'ps', 'ns', 'µs', '%', '°', 'turns?', 'Gb/s', 'Mb/s', 'dB/turn'];
 const UNIT_AFTER_SPACE = new RegExp(`(\\d)[ \\u2009](?=(?:${UNITS.map((u) => u.replace(/[/]/g, '\\/')).join('|')})(?![\\p{L}\\d]))`, 'gu');
 
+/** "0.1 / 0.3 / 0.5 dB": the slashes of a spread stay with their numbers. */
+const SPREAD = /(\d) \/ (?=[\d−-])/g;
+
 export function keepNumbersWithUnits(text: string): string {
-  return text.replace(UNIT_AFTER_SPACE, '$1\u00a0');
+  return text.replace(UNIT_AFTER_SPACE, '$1\u00a0').replace(SPREAD, '$1\u00a0/\u00a0');
 }
 
 let installed = false;

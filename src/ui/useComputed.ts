@@ -18,8 +18,13 @@ function startWorker(): Worker {
  * (compared by its JSON form). The latest input wins: a job still running for older
  * input is cancelled by ending that worker, since a synchronous solve cannot be interrupted.
  * `inputError` (a field that does not parse) skips the run and marks the result stale.
+ *
+ * `settleMs` (for heavy tasks): the job starts only once the input has stayed the same that long,
+ * so a number being typed key by key is computed once, not once per key (each computation would
+ * also take CPU from the page on a phone with few cores). The state says busy from the first key,
+ * exactly as while a job runs.
  */
-export function useComputed<I, R>(task: string, input: I | undefined, inputError?: string): ComputedState<R> {
+export function useComputed<I, R>(task: string, input: I | undefined, inputError?: string, settleMs = 0): ComputedState<R> {
   const [state, setState] = useState<ComputedState<R>>({ result: undefined, error: undefined, errorArgument: undefined, stale: false, busy: false });
   const worker = useRef<Worker | undefined>(undefined);
   const running = useRef(0);
@@ -33,6 +38,17 @@ export function useComputed<I, R>(task: string, input: I | undefined, inputError
       setState((s) => ({ ...s, error: inputError ?? s.error, errorArgument: undefined, fault: undefined, stale: s.result !== undefined, busy: false }));
       return;
     }
+    if (settleMs <= 0) {
+      post(key);
+      return;
+    }
+    ++seq.current; // a reply still on its way belongs to older input
+    setState((s) => (s.busy ? s : { ...s, busy: true }));
+    const timer = setTimeout(() => post(key), settleMs);
+    return () => clearTimeout(timer);
+  }, [task, key, inputError, settleMs]);
+
+  function post(key: string): void {
     const id = ++seq.current;
     if (running.current !== 0 && worker.current) {
       worker.current.terminate();
@@ -48,11 +64,11 @@ export function useComputed<I, R>(task: string, input: I | undefined, inputError
     }
     const w = worker.current;
     running.current = id;
-    setState((s) => ({ ...s, busy: true }));
+    setState((s) => (s.busy ? s : { ...s, busy: true }));
     w.onmessage = (ev: MessageEvent<WorkerReply>) => {
       const msg = ev.data;
+      if (msg.id === running.current) running.current = 0; // the worker is free again
       if (msg.id !== seq.current) return;
-      running.current = 0;
       if (msg.ok) {
         setState({ result: msg.result as R, error: undefined, errorArgument: undefined, stale: false, busy: false });
       } else {
@@ -69,7 +85,7 @@ export function useComputed<I, R>(task: string, input: I | undefined, inputError
       setState((s) => ({ ...s, error: DEFECT_TEXT, stale: s.result !== undefined, busy: false }));
     };
     w.postMessage({ id, task, input: JSON.parse(key) });
-  }, [task, key, inputError]);
+  }
 
   return state;
 }

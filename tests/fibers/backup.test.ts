@@ -2,6 +2,14 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { FiberStore, StorageFullError } from '../../src/fibers/db';
 import {
   applyImport,
+  decodeBackup,
+  EMPTY_FILE_TEXT,
+  NOT_TEXT_TEXT,
+  NOT_UTF8_TEXT,
+  proposeDistinctName,
+  readBackupBytes,
+  sameName,
+  UTF16_TEXT,
   BACKUP_FORMAT_ID,
   BACKUP_FORMAT_VERSION,
   exportLibrary,
@@ -75,7 +83,8 @@ describe('a bad file is refused or reported, and the library is unchanged', () =
   const exported = () => exportLibrary([valid], { appVersion: 't' });
   const CASES: [string, () => string, RegExp | 'partial'][] = [
     ['a truncated file', () => exported().slice(0, 120), /damaged or cut off/],
-    ['an empty file', () => '', /damaged or cut off/],
+    ['an empty file', () => '', /The file is empty/],
+    ['a file of only spaces and line breaks', () => ' \n\r\n ', /The file is empty/],
     ['JSON that is a list, not a backup', () => '[1,2,3]', /not a fiber library backup/],
     ['a JSON file of another kind', () => JSON.stringify({ hello: 'world' }), /format marker/],
     ['records that are not a list', () => file([], { records: { a: 1 } }), /no list of fiber types/],
@@ -179,6 +188,128 @@ describe('merge and replace', () => {
     const long = record({ id: 'ft_long' }, stepInput({ name: 'x'.repeat(200) }));
     const { plan } = await tryImport(file([long]));
     expect(plan!.rejected[0].name).toBe('x'.repeat(60) + '…');
+  });
+});
+
+describe('a file that is not UTF-8 text is refused in its own words, and the library is unchanged', () => {
+  const NAME = 'Tray «Øst» café';
+  const text = () => file([record({ id: 'ft_enc' }, stepInput({ name: NAME, notes: 'façade riser' }))]);
+  // Bytes of noise from a fixed linear congruential generator (Numerical Recipes constants), seed 13.
+  const noise = (n: number) => {
+    let seed = 13;
+    return Uint8Array.from({ length: n }, () => ((seed = (seed * 1664525 + 1013904223) >>> 0) >>> 24) & 0xff);
+  };
+  const CASES: [string, () => Uint8Array, string, RegExp][] = [
+    // Latin-1 (ISO 8859-1): « Ø » é are single bytes 0xAB 0xD8 0xBB 0xE9, invalid as UTF-8.
+    ['a backup saved again as Latin-1', () => Uint8Array.from(Buffer.from(text(), 'latin1')), NOT_UTF8_TEXT, /not in the UTF-8 text encoding; export it again from the app/],
+    ['a backup saved again as UTF-16 with its byte-order mark', () => Uint8Array.from(Buffer.from('\ufeff' + text(), 'utf16le')), UTF16_TEXT, /UTF-16 text encoding, not UTF-8/],
+    ['a backup saved again as UTF-16 (big-endian) without a byte-order mark', () => Uint8Array.from(Buffer.from(text(), 'utf16le').swap16()), UTF16_TEXT, /UTF-16 text encoding, not UTF-8/],
+    ['an empty file', () => new Uint8Array(0), EMPTY_FILE_TEXT, /The file is empty/],
+    ['random bytes', () => noise(4096), NOT_TEXT_TEXT, /This is not a text file/],
+    ['a PNG picture’s first bytes', () => Uint8Array.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a, 0, 0, 0, 0x0d, 0x49, 0x48, 0x44, 0x52]), NOT_TEXT_TEXT, /This is not a text file/],
+  ];
+
+  it.each(CASES)('%s', async (_what, bytes, words, pattern) => {
+    const before = await store.list();
+    const res = readBackupBytes(bytes());
+    expect(res.ok).toBe(false);
+    const reason = (res as Refusal).reason;
+    expect(reason).toBe(words);
+    expect(reason).toMatch(pattern);
+    expect(reason).toMatch(/Nothing was imported/);
+    expect(reason).not.toMatch(/damaged or cut off/);
+    expect(await store.list()).toEqual(before);
+  });
+
+  it('the four refusals are four different sentences', () => {
+    expect(new Set([EMPTY_FILE_TEXT, NOT_UTF8_TEXT, UTF16_TEXT, NOT_TEXT_TEXT]).size).toBe(4);
+  });
+
+  it('the same backup in UTF-8, with or without the byte-order mark some editors add, keeps every accented letter', async () => {
+    for (const bom of ['', '\ufeff']) {
+      const decoded = decodeBackup(Uint8Array.from(Buffer.from(bom + text(), 'utf8')));
+      expect(decoded).toEqual({ ok: true, text: text() });
+      const parsed = ok(readBackupBytes(Uint8Array.from(Buffer.from(bom + text(), 'utf8'))));
+      expect(parsed.valid.map((r) => [r.name, r.notes])).toEqual([[NAME, 'façade riser']]);
+    }
+  });
+});
+
+describe('a record whose name is already saved for a different fiber', () => {
+  // Existing A is step-index 8.2 µm, NA 0.14 (helpers.stepInput).
+  const clashing = (id: string, over = {}) => record({ id, updatedAt: T0 + 5 }, gradedInput({ name: 'existing a', ...over }));
+
+  it('is not counted as a new type: the plan names it, says what differs, and proposes a distinct name', async () => {
+    const { plan } = await tryImport(file([clashing('ft_c1')]));
+    expect(plan!.added).toEqual([]);
+    expect(plan!.clashes).toHaveLength(1);
+    const c = plan!.clashes[0]!;
+    expect(c).toMatchObject({ position: 1, existingInFile: false, proposedName: 'existing a (2)', choice: 'keep-both' });
+    expect(c.existing.name).toBe('Existing A');
+    expect(c.differences).toEqual(expect.arrayContaining(['Profile: step-index → graded-index', 'Core diameter: 8.2 µm → 50 µm', 'NA: 0.14 → 0.2']));
+    expect(plan!.records.map((r) => [r.position, r.name, r.fate])).toEqual([[1, 'existing a', 'clash']]);
+  });
+
+  it('keep both (the default) imports it under the proposed name; the saved one is untouched', async () => {
+    const before = await store.list();
+    const { result } = await tryImport(file([clashing('ft_c1')]));
+    expect(result!.written).toBe(1);
+    const after = await store.list();
+    for (const r of before) expect(after.find((a) => a.id === r.id)).toEqual(r);
+    expect(await store.get('ft_c1')).toEqual({ ...clashing('ft_c1'), name: 'existing a (2)', nameKey: 'existing a (2)' });
+  });
+
+  it('skip writes nothing; replace removes the saved one and writes the file’s, in one transaction', async () => {
+    const before = await store.list();
+    const a = before.find((r) => r.name === 'Existing A')!;
+    const parsed = ok(readBackup(file([clashing('ft_c1')])));
+    const skip = planImport(parsed, before, 'merge', { ft_c1: 'skip' });
+    expect(skip.toWrite).toEqual([]);
+    expect((await applyImport(store, skip)).written).toBe(0);
+    expect(await store.list()).toEqual(before);
+    const replace = planImport(parsed, before, 'merge', { ft_c1: 'replace' });
+    expect(replace.toDelete).toEqual([a.id]);
+    await applyImport(store, replace);
+    expect(await store.get(a.id)).toBeUndefined();
+    expect(await store.get('ft_c1')).toEqual({ ...clashing('ft_c1'), nameKey: 'existing a' });
+    expect(await store.count()).toBe(before.length);
+  });
+
+  it('a proposed name is free in the library and in the file; two clashes in one file get two names', async () => {
+    const inFile = record({ id: 'ft_c3' }, labelInput({ name: 'Existing A (2)' }));
+    const plan = planImport(ok(readBackup(file([clashing('ft_c1'), clashing('ft_c2', { coreDiameterUm: 62.5 }), inFile]))), await store.list(), 'merge');
+    expect(plan.clashes.map((c) => c.proposedName)).toEqual(['existing a (3)', 'existing a (4)']);
+    // The first is kept under a new name, so the name still belongs to the saved type for the second.
+    expect(plan.clashes.map((c) => c.existing.name)).toEqual(['Existing A', 'Existing A']);
+  });
+
+  it('two records of the file with the same name: the second can be kept under another name or skipped, not replace the first', async () => {
+    const one = record({ id: 'ft_f1' }, labelInput({ name: 'Drum 40' }));
+    const two = record({ id: 'ft_f2' }, labelInput({ name: 'DRUM  40', mfdUm: 9.4 }));
+    const plan = planImport(ok(readBackup(file([one, two]))), await store.list(), 'merge', { ft_f2: 'replace' });
+    expect(plan.added).toEqual(['Drum 40']);
+    expect(plan.clashes).toHaveLength(1);
+    expect(plan.clashes[0]).toMatchObject({ existingInFile: true, choice: 'keep-both', proposedName: 'DRUM  40 (2)' });
+    expect(plan.clashes[0]!.differences).toEqual(['Mode field diameter: 9.2 µm → 9.4 µm']);
+  });
+
+  it('the same fiber under the same name and another id is still a duplicate, skipped (no choice needed)', async () => {
+    const [a] = await store.list();
+    const { plan } = await tryImport(file([{ ...a, id: 'ft_twin2', name: '  existing   A ' }]));
+    expect(plan!.clashes).toEqual([]);
+    expect(plan!.sameAsExisting).toEqual([{ name: 'existing   A', existingName: 'Existing A' }]);
+  });
+
+  it('sameName ignores case, spacing and compatible characters; proposals fit the 80-character limit', () => {
+    expect(sameName('Splice tray 12 — Øst', '  splice TRAY  12 — øst')).toBe(true);
+    expect(sameName('Tray 1', 'Tray 1 ')).toBe(true);
+    expect(sameName('Tray 1', 'Tray 11')).toBe(false);
+    expect(sameName('Ｔray 1', 'Tray 1')).toBe(true); // fullwidth Ｔ is compatible with T (NFKC)
+    const long = 'x'.repeat(80);
+    const p = proposeDistinctName(long, new Set([long]));
+    expect(p).toBe('x'.repeat(76) + ' (2)');
+    expect(p.length).toBe(80);
+    expect(proposeDistinctName('Tray', new Set(['tray', 'tray (2)', 'tray (3)']))).toBe('Tray (4)');
   });
 });
 

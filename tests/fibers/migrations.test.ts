@@ -1,8 +1,7 @@
 // Every migration from every earlier schema version, with the data checked field by field.
 // Old records are written with the old schema exactly as that version of the app wrote them.
 import { beforeEach, describe, expect, it } from 'vitest';
-import { FiberStore, openRaw, SCHEMA_VERSION, V1_IMPLIED_GRADED_ALPHA, type FiberTypeV1, type FiberTypeV2, type StoreStatus } from '../../src/fibers/db';
-import { nameKeyOf } from '../../src/fibers/model';
+import { FiberStore, openRaw, SCHEMA_VERSION, type FiberTypeV1, type FiberTypeV2, type StoreStatus } from '../../src/fibers/db';
 import { freshIndexedDb, T0, uniqueDbName } from './helpers';
 
 const V1_RECORDS: FiberTypeV1[] = [
@@ -68,16 +67,64 @@ const V2_RECORDS: FiberTypeV2[] = [
   },
 ];
 
-/** What each v1 record must look like after migration to the newest schema. */
-function expectedFromV1(r: FiberTypeV1) {
-  const { attenuationDbPerKm, attenuationWavelengthNm, ...rest } = r;
-  return {
-    ...rest,
-    attenuation: attenuationDbPerKm === undefined ? [] : [{ wavelengthNm: attenuationWavelengthNm, dbPerKm: attenuationDbPerKm }],
-    ...(r.profile === 'graded' ? { gradedAlpha: V1_IMPLIED_GRADED_ALPHA } : {}),
-    nameKey: nameKeyOf(r.name),
-  };
+/**
+ * What each v1 record must look like in the newest schema, written out literally (not built from the code's constants):
+ * the single attenuation value becomes a one-entry list; a v1 graded fiber gets α = 2, because v1 drew every graded
+ * core as parabolic (its own documentation of the graded profile, the common-practice default α = 2); the name key is
+ * the name trimmed, inner spaces collapsed and lower-cased.
+ */
+const EXPECTED_FROM_V1: Record<string, object> = {
+  v1_step: {
+    id: 'v1_step',
+    name: '  Yard Spool   4 ',
+    profile: 'step',
+    coreDiameterUm: 8.2,
+    claddingDiameterUm: 125,
+    na: 0.14,
+    attenuation: [{ wavelengthNm: 1550, dbPerKm: 0.21 }],
+    category: 'G.652.D',
+    notes: 'north yard',
+    createdAt: T0,
+    updatedAt: T0 + 1000,
+    nameKey: 'yard spool 4',
+  },
+  v1_graded: {
+    id: 'v1_graded',
+    name: 'Riser OM1',
+    profile: 'graded',
+    gradedAlpha: 2,
+    coreDiameterUm: 62.5,
+    claddingDiameterUm: 125,
+    na: 0.275,
+    attenuation: [],
+    notes: '',
+    createdAt: T0,
+    updatedAt: T0,
+    nameKey: 'riser om1',
+  },
+  v1_label: {
+    id: 'v1_label',
+    name: 'Drum 12',
+    profile: 'label',
+    claddingDiameterUm: 125,
+    cutoffWavelengthNm: 1250,
+    cutoffKind: 'cable',
+    mfdUm: 9.1,
+    mfdWavelengthNm: 1310,
+    attenuation: [{ wavelengthNm: 1310, dbPerKm: 0.34 }],
+    notes: 'label photo in job file',
+    createdAt: T0 + 5,
+    updatedAt: T0 + 6,
+    nameKey: 'drum 12',
+  },
+};
+
+function expectedFromV1(r: FiberTypeV1): Record<string, unknown> {
+  return EXPECTED_FROM_V1[r.id] as Record<string, unknown>;
 }
+
+/** Name keys of the v2 records in the newest schema (the name trimmed, spaces collapsed, lower-cased), written out. */
+const V2_NAME_KEYS: Record<string, string> = { v2_graded: 'plant room om4' };
 
 async function seed(name: string, version: number, records: object[]): Promise<void> {
   const db = await openRaw({ name, version });
@@ -121,7 +168,7 @@ describe('schema migrations keep every saved type', () => {
     const name = uniqueDbName();
     await seed(name, 2, V2_RECORDS);
     const store = await FiberStore.open({ name });
-    expect(await store.get(r.id)).toEqual({ ...r, nameKey: nameKeyOf(r.name) });
+    expect(await store.get(r.id)).toEqual({ ...r, nameKey: V2_NAME_KEYS[r.id] });
     store.close();
   });
 

@@ -1,5 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
-import { FiberStore, InvalidRecordError, NotFoundError, StoreClosedError } from '../../src/fibers/db';
+import { EditConflictError, FiberStore, InvalidRecordError, NameClashError, NotFoundError, StoreClosedError } from '../../src/fibers/db';
 import { freshIndexedDb, gradedInput, labelInput, stepInput, uniqueDbName } from './helpers';
 
 let store: FiberStore;
@@ -89,5 +89,80 @@ describe('saving fiber types', () => {
   it('a closed library refuses work with a reason instead of failing silently', async () => {
     store.close();
     await expect(store.list()).rejects.toBeInstanceOf(StoreClosedError);
+  });
+});
+
+describe('an edit made in two places at once', () => {
+  // Two tabs are two connections to one database: the same name opened twice.
+  it('the second save, based on a version changed meanwhile, is refused with what changed, and the first edit is kept', async () => {
+    const a = await store.add(stepInput({ coreDiameterUm: 9, na: 0.13 }), 1_780_000_000_000);
+    // Both tabs read version a; tab 1 saves first.
+    const first = await store.update(a.id, stepInput({ coreDiameterUm: 9.1, na: 0.13 }), 1_780_000_100_000, { base: a });
+    const err = await store.update(a.id, stepInput({ coreDiameterUm: 8.9, na: 0.13 }), 1_780_000_200_000, { base: a }).catch((e) => e);
+    expect(err).toBeInstanceOf(EditConflictError);
+    expect((err as EditConflictError).current).toEqual(first);
+    expect((err as EditConflictError).changes).toEqual(['Core diameter: 9 µm → 9.1 µm']);
+    expect((err as EditConflictError).message).toMatch(/changed in another tab/);
+    expect(await store.get(a.id)).toEqual(first);
+  });
+
+  it('saving over the other version knowingly (its version as the base) writes, and moves the change time on', async () => {
+    const a = await store.add(stepInput(), 1_780_000_000_000);
+    const first = await store.update(a.id, stepInput({ notes: 'tab 1' }), 1_780_000_100_000, { base: a });
+    const mine = await store.update(a.id, stepInput({ notes: 'tab 2' }), 1_780_000_200_000, { base: first });
+    expect(mine).toMatchObject({ notes: 'tab 2', updatedAt: 1_780_000_200_000 });
+    expect(await store.get(a.id)).toEqual(mine);
+  });
+
+  it('the change time moves forward on every save even when the clock does not (or goes back), so a version is never taken for another', async () => {
+    const a = await store.add(stepInput(), 1_780_000_000_000);
+    const b = await store.update(a.id, stepInput({ notes: 'one' }), 1_780_000_000_000);
+    const c = await store.update(a.id, stepInput({ notes: 'two' }), 1_779_999_000_000);
+    expect(b.updatedAt).toBe(a.updatedAt + 1);
+    expect(c.updatedAt).toBe(b.updatedAt + 1);
+    await expect(store.update(a.id, stepInput({ notes: 'stale' }), 1_780_000_000_000, { base: b })).rejects.toBeInstanceOf(EditConflictError);
+  });
+
+  it('a change of content under the same change time (an import replacing the library) is still caught', async () => {
+    const a = await store.add(stepInput(), 1_780_000_000_000);
+    await store.applyRecords([{ ...a, na: 0.12 }], 'replace');
+    const err = await store.update(a.id, stepInput({ notes: 'mine' }), 1_780_000_100_000, { base: a }).catch((e) => e);
+    expect(err).toBeInstanceOf(EditConflictError);
+    expect((err as EditConflictError).changes).toEqual(['NA: 0.14 → 0.12']);
+  });
+
+  it('a type deleted in the other tab while this one edits it: refused as before, nothing written', async () => {
+    const a = await store.add(stepInput());
+    await store.delete(a.id);
+    await expect(store.update(a.id, stepInput({ notes: 'late' }), Date.now(), { base: a })).rejects.toBeInstanceOf(NotFoundError);
+    expect(await store.count()).toBe(0);
+  });
+});
+
+describe('a name already saved, on add and on rename', () => {
+  it('adding a type under a name already saved (other case and spacing) is refused with a proposed name, and nothing is written', async () => {
+    const a = await store.add(stepInput({ name: 'Splice tray 12 — Øst' }));
+    await store.add(stepInput({ name: 'splice tray 12 — øst (2)' }));
+    const err = await store.add(gradedInput({ name: '  SPLICE tray   12 — Øst ' }), Date.now(), { refuseSameName: true }).catch((e) => e);
+    expect(err).toBeInstanceOf(NameClashError);
+    expect((err as NameClashError).existing).toEqual(a);
+    expect((err as NameClashError).proposedName).toBe('SPLICE tray   12 — Øst (3)');
+    expect(await store.count()).toBe(2);
+  });
+
+  it('kept on purpose (no refusal asked), the same name is saved', async () => {
+    await store.add(stepInput({ name: 'Tray 7' }));
+    await store.add(gradedInput({ name: 'tray 7' }));
+    expect((await store.list()).map((r) => r.name)).toEqual(['Tray 7', 'tray 7']);
+  });
+
+  it('renaming to a name another type has is refused; editing other fields of a type that already shares a name is not', async () => {
+    const a = await store.add(stepInput({ name: 'Tray 7' }));
+    const b = await store.add(gradedInput({ name: 'Tray 8' }));
+    await expect(store.update(b.id, gradedInput({ name: 'TRAY 7' }), Date.now(), { refuseSameName: true, base: b })).rejects.toBeInstanceOf(NameClashError);
+    expect(await store.get(b.id)).toEqual(b);
+    const twin = await store.add(stepInput({ name: 'tray 7' }));
+    await expect(store.update(twin.id, stepInput({ name: 'tray 7', notes: 'checked' }), Date.now(), { refuseSameName: true, base: twin })).resolves.toMatchObject({ notes: 'checked' });
+    await expect(store.update(a.id, stepInput({ name: 'Tray 7' }), Date.now(), { refuseSameName: true })).resolves.toMatchObject({ id: a.id });
   });
 });

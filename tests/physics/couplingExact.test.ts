@@ -78,7 +78,7 @@ describe('exact step-index multimode modes', () => {
   it('coupling into all guided modes of a step multimode fiber never exceeds 1', () => {
     const set = multimodeModes({ profile: 'step', coreRadiusUm: 25, na: 0.2 }, 1310);
     for (const d of [0, 5, 15, 24]) {
-      const r = singleModeToMultimode({ source: gaussianRadialField(9.2), modes: set, offsetUm: d });
+      const r = singleModeToMultimode({ source: gaussianRadialField(9.2, 1310), modes: set, offsetUm: d });
       expect(r.perMode.reduce((s, m) => s + m.fraction, 0)).toBeLessThanOrEqual(1);
     }
   });
@@ -90,14 +90,14 @@ describe('exact step-index multimode modes', () => {
   it('an offset Gaussian into a step fiber through exact and finite-difference modes agrees within 0.5 %', () => {
     const exact = multimodeModes({ profile: 'step', coreRadiusUm: 10, na: 0.12 }, 1310);
     const fd = multimodeModes({ profile: 'step', coreRadiusUm: 10, na: 0.12 }, 1310, { method: 'finite-difference' });
-    const a = singleModeToMultimode({ source: gaussianRadialField(9.2), modes: exact, offsetUm: 4 });
-    const b = singleModeToMultimode({ source: gaussianRadialField(9.2), modes: fd, offsetUm: 4 });
+    const a = singleModeToMultimode({ source: gaussianRadialField(9.2, 1310), modes: exact, offsetUm: 4 });
+    const b = singleModeToMultimode({ source: gaussianRadialField(9.2, 1310), modes: fd, offsetUm: 4 });
     near(a.coupledFraction, b.coupledFraction, 0.005, 'total');
   });
 
   it('offset loss of a Gaussian into an equal Gaussian never beats the 4.34 rule into a much larger step core', () => {
     const set = multimodeModes({ profile: 'step', coreRadiusUm: 25, na: 0.2 }, 1310);
-    const r = singleModeToMultimode({ source: gaussianRadialField(9.2), modes: set, offsetUm: 10 });
+    const r = singleModeToMultimode({ source: gaussianRadialField(9.2, 1310), modes: set, offsetUm: 10 });
     expect(r.lossDb).toBeLessThan(lateralOffsetLossDb(9.2, 9.2, 10));
   });
 });

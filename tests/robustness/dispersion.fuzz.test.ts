@@ -26,6 +26,16 @@ describe('dispersion: every fiber and wavelength gives a finite D or a typed err
     if (!(r.b > 0 && r.b < 1)) throw new Error(`b = ${r.b}`);
   });
   fuzz(M, 'chromaticDispersion', physics.chromaticDispersion, fc.tuple(fiber, wavelength), checkPoint);
+  const glass = fc.oneof(
+    { arbitrary: fc.constantFrom(physics.FUSED_SILICA, physics.GERMANIA_GLASS), weight: 4 },
+    { arbitrary: inRange(0, physics.MAX_GERMANIA_FRACTION).map((x) => physics.germaniaDopedSilica(x)), weight: 4 },
+    { arbitrary: objectOr(fc.record({ name: fc.string(), source: fc.string(), terms: fc.array(fc.record({ strength: num(-2, 2), resonanceUm: num(-1, 12) }), { maxLength: 4 }), validMinNm: num(0, 3000), validMaxNm: num(0, 5000) })), weight: 2 },
+  ) as fc.Arbitrary<physics.SellmeierGlass>;
+  const glassInput = objectOr(fc.record({ glass, wavelengthNm: wavelength }));
+  // Material dispersion of any glass is finite where the Sellmeier sum is; a sign is not implied (it crosses zero).
+  fuzz(M, 'materialDispersionPsPerNmKm', physics.materialDispersionPsPerNmKm, fc.tuple(glassInput), (r) => {
+    if (!Number.isFinite(r)) throw new Error(`D_M = ${r}`);
+  });
   const sweepOpts = mixValid(
     fc.record({ fromNm: maybe(inRange(1200, 1400)), toNm: maybe(inRange(1500, 1700)), stepNm: inRange(20, 100) }),
     // The default step (1 nm, 451 points) is left to one input in 40: it is the slow case, not the hostile one.

@@ -34,6 +34,11 @@ describe('jointLoss: every joint gives a loss ≥ 0 dB or a typed error', () => 
   fuzz(M, 'lateralOffsetLossDb', physics.lateralOffsetLossDb, mixValid(fc.tuple(okMfd, okMfd, okOffset), fc.tuple(mfd, mfd, offset)), loss);
   fuzz(M, 'tiltLossDb', physics.tiltLossDb, mixValid(fc.tuple(okMfd, okMfd, okTilt, okWavelength, maybe(okIndex)), fc.tuple(mfd, mfd, tilt, wavelength, maybe(index))), loss);
   fuzz(M, 'endGapLossDb', physics.endGapLossDb, mixValid(fc.tuple(okMfd, okMfd, okGap, okWavelength, maybe(okIndex)), fc.tuple(mfd, mfd, gap, wavelength, maybe(index))), loss);
+  const tiltMedium = mixValid(
+    fc.record({ gapUm: maybe(okGap), mediumIndex: maybe(okIndex), fiberIndex: maybe(okIndex) }),
+    objectOr(fc.record({ gapUm: maybe(gap), mediumIndex: maybe(index), fiberIndex: maybe(index) })),
+  );
+  fuzz(M, 'tiltMediumIndex', physics.tiltMediumIndex, fc.tuple(tiltMedium), (r) => expectBetween(r, 1, 2, 'index the tilt happens in'));
   const record = (m: fc.Arbitrary<number>, w: fc.Arbitrary<number>, o: fc.Arbitrary<number>, t: fc.Arbitrary<number>, g: fc.Arbitrary<number>, n: fc.Arbitrary<number>) =>
     fc.record({ mfd1Um: m, mfd2Um: m, wavelengthNm: w, lateralOffsetUm: maybe(o), tiltDeg: maybe(t), gapUm: maybe(g), mediumIndex: maybe(n), fiberIndex: maybe(n) });
   const joint = mixValid(record(okMfd, okWavelength, okOffset, okTilt, okGap, okIndex), objectOr(record(mfd, wavelength, offset, tilt, gap, index))) as fc.Arbitrary<physics.GaussianJointInput>;

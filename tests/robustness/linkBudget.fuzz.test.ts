@@ -3,7 +3,7 @@
 import fc from 'fast-check';
 import { describe } from 'vitest';
 import * as physics from '../../src/physics';
-import { MAX_SPLITTER_WAYS, TIA_568_3_D, TYPICAL_VALUES } from '../../src/physics';
+import { MAX_SPLITTER_WAYS, TIA_568_3_D, TIA_568_C_3, TYPICAL_VALUES } from '../../src/physics';
 import { expectNonNegative, fuzz, inRange, int, maybe, mixValid, notANumber, num, objectOr, reportAfterAll } from './fuzzKit';
 
 const M = 'linkBudget';
@@ -37,7 +37,7 @@ const element: fc.Arbitrary<physics.LinkElement> = fc.oneof(
 );
 const ownRules = fc.record({ connectorPairDb: spread, spliceDb: spread, splitterExcessPerStageDb: maybe(spread) });
 const ruleSet = fc.oneof(
-  { arbitrary: fc.constantFrom(TIA_568_3_D, TYPICAL_VALUES), weight: 6 },
+  { arbitrary: fc.constantFrom(TIA_568_3_D, TIA_568_C_3, TYPICAL_VALUES), weight: 6 },
   { arbitrary: ownRules.map((v) => { try { return physics.ownRuleSet(v); } catch { return TYPICAL_VALUES; } }), weight: 2 },
   { arbitrary: fc.oneof(notANumber, fc.record({ name: fc.string(), connectorPairDb: spread, spliceDb: spread, splitterExcessPerStageDb: spread, fiberMaxima: fc.constant([]) })), weight: 1 },
 ) as fc.Arbitrary<physics.LinkRuleSet>;
@@ -65,7 +65,7 @@ const validElement: fc.Arbitrary<physics.LinkElement> = fc.oneof(
 const validInput = fc.record({
   elements: fc.array(validElement, { maxLength: 12 }),
   wavelengthsNm: fc.array(fc.constantFrom(...windows), { minLength: 1, maxLength: 3 }),
-  ruleSet: fc.constantFrom(TIA_568_3_D, TYPICAL_VALUES),
+  ruleSet: fc.constantFrom(TIA_568_3_D, TIA_568_C_3, TYPICAL_VALUES),
   designMarginDb: inRange(0, 6),
   equipment: maybe(fc.array(equipment, { maxLength: 3 })),
 }) as fc.Arbitrary<physics.LinkBudgetInput>;

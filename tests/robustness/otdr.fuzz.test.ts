@@ -18,7 +18,7 @@ describe('otdr: every reading gives a finite, consistent answer or a typed error
     expectNonNegative(r.mismatchLossDb, 'mismatch loss');
     // The backscatter step cancels in the two-way average (ITU-T G.650.3): the readings straddle the true loss.
     expectClose((r.apparentFromADb + r.apparentFromBDb) / 2, r.trueLossDb, 1e-9, 'two-way average');
-  });
+  }, { minSuccessShare: 0.99 }); // every in-range reading has an answer (measured: 100 %)
   fuzz(M, 'otdrTwoWayAverage', physics.otdrTwoWayAverage, fc.tuple(reading, reading), (r, [a, b]) => {
     expectClose(r.trueLossDb, (a + b) / 2, 1e-12, 'average');
     expectFinitePositive(r.impliedMfdRatioBA, 'implied MFD ratio');

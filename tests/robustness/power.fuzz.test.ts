@@ -16,11 +16,15 @@ const steps = fc.oneof({ arbitrary: fc.array(step, { maxLength: 12 }), weight: 8
 describe('power: every input gives a finite power or a typed error', () => {
   reportAfterAll(M);
   fuzz(M, 'dbmToMw', physics.dbmToMw, fc.tuple(dbm), (r) => expectFinitePositive(r, 'power in mW'));
-  fuzz(M, 'mwToDbm', physics.mwToDbm, fc.tuple(mw), (r) => expectBetween(r, POWER_DBM_MIN, POWER_DBM_MAX, 'power in dBm'));
+  // In range: the powers whose dBm value lies in POWER_DBM_MIN..MAX (the generator above reaches beyond on purpose).
+  const inDbmRange = (mwPerUnit: number) => fc.tuple(fc.double({ min: POWER_DBM_MIN, max: POWER_DBM_MAX, noNaN: true }).map((d) => 10 ** (d / 10) / mwPerUnit));
+  fuzz(M, 'mwToDbm', physics.mwToDbm, fc.tuple(mw), (r) => expectBetween(r, POWER_DBM_MIN, POWER_DBM_MAX, 'power in dBm'), { inRange: inDbmRange(1) });
   fuzz(M, 'dbmToUw', physics.dbmToUw, fc.tuple(dbm), (r) => expectFinitePositive(r, 'power in µW'));
-  fuzz(M, 'uwToDbm', physics.uwToDbm, fc.tuple(num(1e-15, 1e15)), (r) => expectBetween(r, POWER_DBM_MIN, POWER_DBM_MAX, 'power in dBm'));
+  fuzz(M, 'uwToDbm', physics.uwToDbm, fc.tuple(num(1e-15, 1e15)), (r) => expectBetween(r, POWER_DBM_MIN, POWER_DBM_MAX, 'power in dBm'), { inRange: inDbmRange(1e-3) });
   fuzz(M, 'dbToRatio', physics.dbToRatio, fc.tuple(db), (r) => expectFinitePositive(r, 'power ratio'));
-  fuzz(M, 'ratioToDb', physics.ratioToDb, fc.tuple(num(1e-35, 1e35)), (r) => expectBetween(r, -STEP_DB_LIMIT, STEP_DB_LIMIT, 'ratio in dB'));
+  fuzz(M, 'ratioToDb', physics.ratioToDb, fc.tuple(num(1e-35, 1e35)), (r) => expectBetween(r, -STEP_DB_LIMIT, STEP_DB_LIMIT, 'ratio in dB'), {
+    inRange: fc.tuple(fc.double({ min: -STEP_DB_LIMIT, max: STEP_DB_LIMIT, noNaN: true }).map((d) => 10 ** (d / 10))),
+  });
   fuzz(M, 'powerAfterLossDbm', physics.powerAfterLossDbm, fc.tuple(dbm, db), (r, [p, l]) => expectClose(r, p - l, 1e-12, 'power after loss'));
   fuzz(M, 'powerChain', physics.powerChain, fc.tuple(dbm, steps), (r) => {
     expectFinitePositive(r.startMw, 'start power mW');

@@ -54,12 +54,19 @@ const HOSTILE_TEXTS = [
   '1_000',
   '9'.repeat(400),
   '0.' + '0'.repeat(60) + '1',
+  '0.5 milliwatt',
+  '\u22123 dBm',
+  '1\u2009550\u2009nm',
+  '1\u2009\u2009550',
 ];
 const numberPart = fc.oneof(
   fc.double({ min: -1e4, max: 1e4, noNaN: true }).map((x) => String(x)),
   fc.double({ min: -1e4, max: 1e4, noNaN: true }).map((x) => String(x).replace('.', ',')),
   fc.oneof(edgeNumber, anyDouble).map((x) => String(x)),
   fc.constantFrom('1e308', '1e-308', '5e-324', '-0', '0x10', '1,2,3', '١٥٥٠', '1e309'),
+  // Typography: minus U+2212, en dash U+2013, digits grouped by thin, narrow no-break and no-break spaces.
+  fc.tuple(fc.constantFrom('\u2212', '\u2013', '', '-'), fc.integer({ min: 1, max: 999 }), fc.array(fc.constantFrom('\u2009', '\u202f', '\u00a0', ' ', ''), { maxLength: 3 }), fc.integer({ min: 0, max: 999 }))
+    .map(([sign, a, seps, b]) => sign + String(a) + seps.map((sp) => sp + String(b).padStart(3, '0')).join('')),
 );
 const text = fc.oneof(
   { arbitrary: fc.tuple(numberPart, fc.constantFrom('', ' ', '  '), fc.constantFrom(...UNITS)).map(([n, sp, u]) => n + sp + u), weight: 6 },
@@ -77,11 +84,16 @@ describe('units: every typed text gives one finite value or a typed error', () =
     fc.tuple(fc.constant('field'), fc.tuple(numberPart, fc.constantFrom('', ' '), fc.constantFrom(...UNITS_BY_KIND[k])).map(([n, sp, u]) => n + sp + u), fc.constant(k)),
   );
   const args = fc.oneof(matched, fc.tuple(fc.constantFrom('wavelengthNm', 'lengthKm'), text, kind));
+  // In range: an ordinary number (decimal point or comma) with a unit of the field's own kind, or none.
+  const ordinary = fc.double({ min: 1e-3, max: 1e4, noNaN: true }).map((x) => String(Number(x.toPrecision(6))));
+  const inRangeText = fc.constantFrom(...KINDS.filter((k) => k !== 'power')).chain((k) =>
+    fc.tuple(fc.constant('field'), fc.tuple(ordinary, fc.constantFrom('', ' '), fc.constantFrom(...UNITS_BY_KIND[k])).map(([n, sp, u]) => n + sp + u), fc.constant(k)),
+  );
   fuzz(M, 'parseQuantity', physics.parseQuantity, args, (r, [, t]) => {
     if (typeof t !== 'string' || t.length > MAX_FIELD_CHARS) throw new Error('accepted a text it should refuse');
     if (Object.is(r.value, -0)) throw new Error('gave −0, which a field would show as "-0"');
-  });
+  }, { inRange: inRangeText, minSuccessShare: 0.99 });
   fuzz(M, 'formatPlain', physics.formatPlain, fc.tuple(fc.oneof(anyDouble, edgeNumber, notANumber as fc.Arbitrary<number>)), (r) => {
     if (typeof r !== 'string' || r === '') throw new Error(`gave ${JSON.stringify(r)}, expected a number in words`);
-  });
+  }, { inRange: fc.tuple(fc.double({ noNaN: true, noDefaultInfinity: true })), minSuccessShare: 1 });
 });

@@ -6,16 +6,36 @@ import { draftToInput, type FiberDraft } from './draft';
 import { CATEGORY_PRESETS } from '../../fibers/presets';
 import { resolveLabel, resolveTyped } from '../../fibers/resolve';
 import { NAME_MAX_CHARS, NOTES_MAX_CHARS, type FieldErrors } from '../../fibers/validate';
-import type { FiberProfile, FiberTypeInput } from '../../fibers/model';
+import type { FiberProfile, FiberType, FiberTypeInput } from '../../fibers/model';
 import { errorText } from '../../ui/errorText';
 import { FiberSummary } from '../../ui/FiberPicker';
+
+/** Why a save did not happen, for the form to show beside its fields or as a choice to make. */
+export interface SaveOutcome {
+  errors?: FieldErrors;
+  message?: string;
+  /** Another saved type has this name: the person picks the proposed name, another name, or keeps it. */
+  nameClash?: { existingName: string; existingDescription: string; proposedName: string };
+  /** The type was changed elsewhere since this form opened: what changed, and the saved version. */
+  conflict?: { current: FiberType; changes: string[] };
+}
+
+/** What the person decided after a warning. */
+export interface SaveChoice {
+  /** Keep a name another type already has, knowingly. */
+  allowSameName?: boolean;
+  /** Write over this saved version, knowingly (the version shown in the conflict). */
+  overwrite?: FiberType;
+}
 
 export interface FiberFormProps {
   title: string;
   initial: FiberDraft;
   submitLabel: string;
-  /** Resolves to undefined when saved, or to field errors / a message when not. */
-  onSave: (input: FiberTypeInput) => Promise<{ errors?: FieldErrors; message?: string } | undefined>;
+  /** Resolves to undefined when saved, or to what stopped the save. */
+  onSave: (input: FiberTypeInput, choice?: SaveChoice) => Promise<SaveOutcome | undefined>;
+  /** After a conflict: reopen the form on the version saved elsewhere (this form's edits are dropped). */
+  onLoadOther?: (current: FiberType) => void;
   onCancel: () => void;
 }
 
@@ -25,11 +45,13 @@ const PROFILES: [FiberProfile, string][] = [
   ['label', 'From the label (cutoff and mode field diameter)'],
 ];
 
-export function FiberForm({ title, initial, submitLabel, onSave, onCancel }: FiberFormProps) {
+export function FiberForm({ title, initial, submitLabel, onSave, onLoadOther, onCancel }: FiberFormProps) {
   const [d, setD] = useState<FiberDraft>(initial);
   const [tried, setTried] = useState(false);
   const [saveErrors, setSaveErrors] = useState<FieldErrors>({});
   const [message, setMessage] = useState<string | undefined>(undefined);
+  const [nameClash, setNameClash] = useState<SaveOutcome['nameClash']>(undefined);
+  const [conflict, setConflict] = useState<SaveOutcome['conflict']>(undefined);
   const [busy, setBusy] = useState(false);
   const set = <K extends keyof FiberDraft>(k: K, v: FiberDraft[K]) => setD((old) => ({ ...old, [k]: v }));
 
@@ -61,22 +83,35 @@ export function FiberForm({ title, initial, submitLabel, onSave, onCancel }: Fib
     }
   }, [parsed.input]);
 
-  const submit = async (e: Event) => {
-    e.preventDefault();
+  const attempt = async (input: FiberTypeInput | undefined, choice?: SaveChoice) => {
     setTried(true);
     setSaveErrors({});
     setMessage(undefined);
-    if (!parsed.input) {
+    setNameClash(undefined);
+    setConflict(undefined);
+    if (!input) {
       setMessage('Not saved: check the fields marked below.');
       return;
     }
     setBusy(true);
-    const res = await onSave(parsed.input);
+    const res = await onSave(input, choice);
     setBusy(false);
-    if (res) {
-      setSaveErrors(res.errors ?? {});
-      setMessage(res.message ?? 'Not saved.');
-    }
+    if (!res) return;
+    setSaveErrors(res.errors ?? {});
+    setNameClash(res.nameClash);
+    setConflict(res.conflict);
+    if (!res.nameClash && !res.conflict) setMessage(res.message ?? 'Not saved.');
+  };
+
+  const submit = (e: Event) => {
+    e.preventDefault();
+    void attempt(parsed.input);
+  };
+
+  const saveAsProposed = (proposedName: string) => {
+    const next = { ...d, name: proposedName };
+    setD(next);
+    void attempt(draftToInput(next).input);
   };
 
   const isLabel = d.profile === 'label';
@@ -89,6 +124,46 @@ export function FiberForm({ title, initial, submitLabel, onSave, onCancel }: Fib
         <p class="status status-error" role="alert">
           {message}
         </p>
+      )}
+      {conflict && (
+        <div class="status status-error edit-conflict" role="alert">
+          <p>
+            Not saved: “{conflict.current.name}” was changed in another tab (or by an import) after you opened it here
+            {conflict.changes.length ? ':' : ', though its values are the same.'}
+          </p>
+          {conflict.changes.length > 0 && (
+            <ul>
+              {conflict.changes.map((c, i) => (
+                <li key={i}>{c}</li>
+              ))}
+            </ul>
+          )}
+          <p>Your edits are still in the form below. Load the other version (your edits here are dropped), or save yours over it knowingly.</p>
+          <div class="row">
+            <button type="button" disabled={busy} onClick={() => onLoadOther?.(conflict.current)}>
+              Load the other version
+            </button>
+            <button type="button" disabled={busy} onClick={() => void attempt(parsed.input, { overwrite: conflict.current })}>
+              Save mine over it
+            </button>
+          </div>
+        </div>
+      )}
+      {nameClash && (
+        <div class="status verdict-warn name-clash" role="alert">
+          <p>
+            Not saved yet: a fiber type is already saved as “{nameClash.existingName}” ({nameClash.existingDescription}). Two entries with the same name cannot be told
+            apart in the list or in the calculators' pickers. Save it under another name, change the name below, or keep the same name on purpose.
+          </p>
+          <div class="row">
+            <button type="button" disabled={busy} onClick={() => saveAsProposed(nameClash.proposedName)}>
+              Save as “{nameClash.proposedName}”
+            </button>
+            <button type="button" disabled={busy} onClick={() => void attempt(parsed.input, { allowSameName: true })}>
+              Save with the same name anyway
+            </button>
+          </div>
+        </div>
       )}
       <div class="form">
         <Field id="ff-name" label="Name" inputMode="text" maxLength={NAME_MAX_CHARS + 20} value={d.name} onInput={(v) => set('name', v)} error={errors.name} help="Your own name for it, e.g. the drum or job it belongs to." />

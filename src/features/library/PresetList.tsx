@@ -1,4 +1,7 @@
 // The standard categories, read-only, each value with its source; clone one into an editable type.
+// A category's table is built when its row is opened: closed, the tables of every category were two
+// thirds of the screen's elements, built on every visit before the saved types could be listed.
+import { useState } from 'preact/hooks';
 import { CATEGORY_PRESETS, type CategoryPreset } from '../../fibers/presets';
 import { formatNumber } from '../../ui/format';
 
@@ -15,15 +18,16 @@ function values(p: CategoryPreset): [string, string, string][] {
   return rows;
 }
 
-export function PresetList({ onClone }: { onClone: (p: CategoryPreset) => void }) {
+function PresetItem({ p, onClone }: { p: CategoryPreset; onClone: (p: CategoryPreset) => void }) {
+  const [open, setOpen] = useState(false);
   return (
-    <ul class="preset-list">
-      {CATEGORY_PRESETS.map((p) => (
-        <li key={p.category}>
-          <details>
-            <summary>
-              {p.title} <span class="note">({p.standard})</span>
-            </summary>
+    <li>
+      <details onToggle={(e) => setOpen((e.currentTarget as HTMLDetailsElement).open)}>
+        <summary>
+          {p.title} <span class="note">({p.standard})</span>
+        </summary>
+        {open && (
+          <>
             <div class="table-wrap">
               <table>
                 <thead>
@@ -52,8 +56,18 @@ export function PresetList({ onClone }: { onClone: (p: CategoryPreset) => void }
             <button type="button" onClick={() => onClone(p)}>
               Clone {p.category} into my library
             </button>
-          </details>
-        </li>
+          </>
+        )}
+      </details>
+    </li>
+  );
+}
+
+export function PresetList({ onClone }: { onClone: (p: CategoryPreset) => void }) {
+  return (
+    <ul class="preset-list">
+      {CATEGORY_PRESETS.map((p) => (
+        <PresetItem key={p.category} p={p} onClone={onClone} />
       ))}
     </ul>
   );

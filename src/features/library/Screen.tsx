@@ -1,28 +1,29 @@
 // Fiber types: the saved library (list, search, add, edit, duplicate, delete with undo), the
 // standard categories to clone, backup and restore, storage status, and the demo library.
-import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
+import { useEffect, useRef, useState } from 'preact/hooks';
 import { useLibrary } from './useLibrary';
-import { FiberList } from './FiberList';
-import { FiberForm } from './FiberForm';
+import { SavedList } from './SavedList';
+import { FiberForm, type SaveChoice, type SaveOutcome } from './FiberForm';
 import { PresetList } from './PresetList';
 import { BackupPanel } from './BackupPanel';
 import { StoragePanel } from './StoragePanel';
-import { filterAndSort, type SortOrder } from './query';
+import { describeType } from './describe';
+import { askAfterSave } from './persistence';
 import { draftFromPreset, draftFromRecord, emptyDraft, type FiberDraft } from './draft';
-import { InvalidRecordError } from '../../fibers/db';
+import { EditConflictError, InvalidRecordError, NameClashError } from '../../fibers/db';
+import './library.css';
 import { DEMO_TYPES, loadDemoLibrary } from '../../fibers/demo';
 import { inputOf, type FiberType, type FiberTypeInput } from '../../fibers/model';
 import { NAME_MAX_CHARS, validateRecord } from '../../fibers/validate';
 
-type View = { kind: 'list' } | { kind: 'form'; title: string; submitLabel: string; draft: FiberDraft; editId?: string; key: number };
+/** An edit form carries the version it started from (`base`): saving checks it is still the saved one. */
+type View = { kind: 'list' } | { kind: 'form'; title: string; submitLabel: string; draft: FiberDraft; editId?: string; base?: FiberType; key: number };
 
 /** How long the undo offer stays after a delete. Common practice for undo bars. */
 const UNDO_MS = 15_000;
 
 export default function Screen() {
   const lib = useLibrary();
-  const [query, setQuery] = useState('');
-  const [order, setOrder] = useState<SortOrder>('name');
   const [view, setView] = useState<View>({ kind: 'list' });
   const [undo, setUndo] = useState<FiberType | undefined>(undefined);
   const [flash, setFlash] = useState<{ ok: boolean; text: string } | undefined>(undefined);
@@ -31,26 +32,37 @@ export default function Screen() {
   const undoTimer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
   useEffect(() => () => clearTimeout(undoTimer.current), []);
 
-  const shown = useMemo(() => (lib.records ? filterAndSort(lib.records, query, order) : []), [lib.records, query, order]);
   const store = lib.store && lib.status === 'open' ? lib.store : undefined;
 
-  const openForm = (title: string, submitLabel: string, draft: FiberDraft, editId?: string) => {
+  const openForm = (title: string, submitLabel: string, draft: FiberDraft, editId?: string, base?: FiberType) => {
     formKey.current += 1;
     setFlash(undefined);
-    setView({ kind: 'form', title, submitLabel, draft, editId, key: formKey.current });
+    setView({ kind: 'form', title, submitLabel, draft, editId, base, key: formKey.current });
   };
 
-  const save = async (input: FiberTypeInput, editId?: string) => {
+  const save = async (input: FiberTypeInput, editId: string | undefined, base: FiberType | undefined, choice: SaveChoice = {}): Promise<SaveOutcome | undefined> => {
     if (!store) return { message: lib.statusText ?? 'The library is not open.' };
+    const refuseSameName = !choice.allowSameName;
     try {
-      const saved = editId ? await store.update(editId, input) : await store.add(input);
+      const saved = editId
+        ? await store.update(editId, input, Date.now(), { base: choice.overwrite ?? base, refuseSameName })
+        : await store.add(input, Date.now(), { refuseSameName });
       setView({ kind: 'list' });
       setFlash({ ok: true, text: `Saved “${saved.name}”.` });
+      askAfterSave();
       return undefined;
     } catch (e) {
       if (e instanceof InvalidRecordError) return { errors: e.errors, message: 'Not saved: check the fields marked below.' };
+      if (e instanceof NameClashError) {
+        return { nameClash: { existingName: e.existing.name, existingDescription: validateRecord(e.existing).ok ? describeType(e.existing) : 'a damaged record', proposedName: e.proposedName } };
+      }
+      if (e instanceof EditConflictError) return { conflict: { current: e.current, changes: e.changes } };
       return { message: e instanceof Error ? e.message : 'Not saved.' };
     }
+  };
+
+  const loadOther = (current: FiberType) => {
+    openForm(`Edit “${typeof current.name === 'string' ? current.name : 'damaged record'}”`, 'Save changes', draftOf(current), current.id, current);
   };
 
   const remove = async (r: FiberType) => {
@@ -88,9 +100,7 @@ export default function Screen() {
   };
 
   const edit = (r: FiberType) => {
-    // A damaged record (fails validation) opens with whatever fields it still has, to be repaired.
-    const d = validateRecord(r).ok ? draftFromRecord(r) : draftFromRecord({ ...emptyDraftRecord(), ...inputOfLoose(r), id: r.id } as FiberType);
-    openForm(`Edit “${typeof r.name === 'string' ? r.name : 'damaged record'}”`, 'Save changes', d, r.id);
+    openForm(`Edit “${typeof r.name === 'string' ? r.name : 'damaged record'}”`, 'Save changes', draftOf(r), r.id, r);
   };
 
   const loadDemo = async () => {
@@ -115,7 +125,15 @@ export default function Screen() {
       )}
 
       {view.kind === 'form' ? (
-        <FiberForm key={view.key} title={view.title} submitLabel={view.submitLabel} initial={view.draft} onSave={(input) => save(input, view.editId)} onCancel={() => setView({ kind: 'list' })} />
+        <FiberForm
+          key={view.key}
+          title={view.title}
+          submitLabel={view.submitLabel}
+          initial={view.draft}
+          onSave={(input, choice) => save(input, view.editId, view.base, choice)}
+          onLoadOther={loadOther}
+          onCancel={() => setView({ kind: 'list' })}
+        />
       ) : (
         <section aria-labelledby="lib-saved">
           <h2 id="lib-saved">Saved fiber types</h2>
@@ -141,30 +159,10 @@ export default function Screen() {
               Enter from a label
             </button>
           </div>
-          <div class="form">
-            <div class="field">
-              <label for="lib-search">Search</label>
-              <input id="lib-search" type="search" value={query} maxLength={80} onInput={(e) => setQuery((e.currentTarget as HTMLInputElement).value)} />
-            </div>
-            <div class="field">
-              <label for="lib-order">Order</label>
-              <select id="lib-order" value={order} onChange={(e) => setOrder((e.currentTarget as HTMLSelectElement).value as SortOrder)}>
-                <option value="name">By name</option>
-                <option value="recent">Most recently changed first</option>
-              </select>
-            </div>
-          </div>
           {lib.records === undefined ? (
             lib.status === 'unavailable' ? <p class="note">No saved types can be shown.</p> : <p class="loading">Opening the library…</p>
-          ) : lib.records.length === 0 ? (
-            <p class="note">No fiber types saved yet. Add one, clone a standard category below, or load the demo library.</p>
           ) : (
-            <>
-              <p class="note" aria-live="polite">
-                {shown.length === lib.records.length ? `${lib.records.length} saved.` : `${shown.length} of ${lib.records.length} match.`}
-              </p>
-              <FiberList records={shown} onEdit={edit} onDuplicate={duplicate} onDelete={remove} busy={busy || !store} />
-            </>
+            <SavedList records={lib.records} onEdit={edit} onDuplicate={duplicate} onDelete={remove} busy={busy || !store} />
           )}
         </section>
       )}
@@ -197,6 +195,11 @@ export default function Screen() {
       </section>
     </div>
   );
+}
+
+/** The form's draft for a saved record; a damaged one (fails validation) opens with whatever fields it still has, to be repaired. */
+function draftOf(r: FiberType): FiberDraft {
+  return validateRecord(r).ok ? draftFromRecord(r) : draftFromRecord({ ...emptyDraftRecord(), ...inputOfLoose(r), id: r.id } as FiberType);
 }
 
 function emptyDraftRecord(): Partial<FiberTypeInput> {

@@ -1,6 +1,7 @@
-// Whether the browser promises to keep the library, and the button to ask it to.
-import { useEffect, useState } from 'preact/hooks';
-import { persistenceStatus, requestPersistence, type PersistenceInfo } from '../../fibers/db';
+// Whether the browser protects the library from automatic clean-up, in one plain sentence, with the
+// space used, the button to ask for protection, and the reminder that a backup is the real copy.
+import { useState } from 'preact/hooks';
+import { askForPersistence, usePersistence } from './persistence';
 
 function size(bytes: number | undefined): string {
   if (bytes === undefined) return '—';
@@ -10,18 +11,11 @@ function size(bytes: number | undefined): string {
 }
 
 export function StoragePanel() {
-  const [info, setInfo] = useState<PersistenceInfo | undefined>(undefined);
+  const info = usePersistence();
   const [asking, setAsking] = useState(false);
-  useEffect(() => {
-    let live = true;
-    void persistenceStatus().then((i) => live && setInfo(i));
-    return () => {
-      live = false;
-    };
-  }, []);
   const ask = async () => {
     setAsking(true);
-    setInfo(await requestPersistence());
+    await askForPersistence();
     setAsking(false);
   };
   if (!info) return <p class="note">Checking storage…</p>;

@@ -1,18 +1,22 @@
-// Laser safety: the cautions and the hazard context for a wavelength and a power. Context only.
+// Laser safety: the usual cautions first, then the hazard context for a wavelength and a power.
+// Context only: nothing here says a level is all right to look at; the site's rules and local codes govern.
 import { NumberField } from '../../ui/NumberField';
 import { need, useQuantity } from '../../ui/useQuantity';
-import { useResult } from '../../ui/useResult';
+import { cardError, useResult } from '../../ui/useResult';
 import { ResultCard } from '../../ui/ResultCard';
-import { formatNumber } from '../../ui/format';
-import { reportText } from '../../ui/copyText';
-import { HAZARD_LEVELS, hazardContextText, IEC_60825_2_EDITION, laserHazardContext, LEVELS_ALLOWED_BY_LOCATION } from '../../physics';
-import { HazardContextCautions } from './HazardContext';
+import { CalcScreen, type Headline } from '../../ui/CalcScreen';
+import { formatFixed, formatQuantity, withUnit } from '../../ui/format';
+import type { ReportSpec } from '../../ui/copyText';
+import { GOVERNING_STATEMENT, HAZARD_LEVELS, IEC_60825_2_EDITION, laserHazardContext, LEVELS_ALLOWED_BY_LOCATION, USUAL_LASER_CAUTIONS } from '../../physics';
+import { addedCautions, HazardContextDetails } from './HazardContext';
 
 const LOCATION_WORDS: Record<keyof typeof LEVELS_ALLOWED_BY_LOCATION, string> = {
   unrestricted: 'Unrestricted (open to anyone)',
   restricted: 'Restricted (not open to the public)',
   controlled: 'Controlled (trained, authorised staff only)',
 };
+
+const BAND_WORDS = { infrared: 'Infrared, invisible', visible: 'Visible light', ultraviolet: 'Ultraviolet, invisible' } as const;
 
 export default function Screen() {
   const wavelength = useQuantity('wavelengthNm', 'wavelength', '1550');
@@ -24,70 +28,91 @@ export default function Screen() {
     power.value,
     power.failure,
   ]);
-  const calc = { error: ctx.error, errorArgument: ctx.errorArgument };
+  const c = ctx.result;
+  const mw = c && (c.powerMw >= 1 ? formatQuantity(c.powerMw, 'mW') : formatQuantity(c.powerMw * 1000, 'µW'));
 
-  const copy =
-    ctx.result &&
-    reportText({
-      title: 'Laser hazard context',
-      inputs: [
-        ['Wavelength', `${ctx.result.wavelengthNm} nm`],
-        ['Power', `${formatNumber(ctx.result.powerDbm, 4)} dBm (${formatNumber(ctx.result.powerMw, 4)} mW)`],
-      ],
-      outputs: [['Context', hazardContextText(ctx.result)]],
-      assumptions: ['Context only; the site’s laser-safety program and local codes govern.'],
-    });
+  // The indicative context in words; never a statement that a level is all right.
+  const headline: Headline | undefined = c && {
+    label: `${mw} at ${withUnit(String(c.wavelengthNm), 'nm')}`,
+    verdict: c.indicativeLevel
+      ? `Indicative hazard level ${c.indicativeLevel.level}: at or above the class 3B limit`
+      : 'Hazard level not stated here: look it up in IEC 60825-2 as adopted locally',
+    tone: c.indicativeLevel ? 'bad' : 'warn',
+    note: `${BAND_WORDS[c.band]}. Context only: your site’s rules and local codes govern.`,
+  };
+
+  const report: ReportSpec | undefined = c && {
+    title: 'Laser hazard context',
+    inputs: [
+      ['Wavelength', withUnit(String(c.wavelengthNm), 'nm')],
+      ['Power', `${withUnit(formatFixed(c.powerDbm, 2), 'dBm')} (${mw})`],
+    ],
+    outputs: [
+      ['Wavelength', c.wavelengthNote],
+      ['Hazard level', c.levelStatement],
+      ...(c.indicativeLevel ? [['Source', c.indicativeLevel.source] as [string, string]] : []),
+    ],
+    assumptions: [...USUAL_LASER_CAUTIONS, ...addedCautions(c), GOVERNING_STATEMENT],
+  };
+
 
   return (
-    <>
-      <h2>Wavelength and power</h2>
-      <p class="note">Enter the power that could come out of an open fiber end or port here: the transmitter or amplifier output, not the received power.</p>
-      <div class="form">
-        <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={[650, 850, 1310, 1490, 1550]} calc={calc} />
-        <NumberField q={power} label="Optical power" unit="dBm" help="Type dBm, or a value with mW or µW." quickPicks={[0, 10, 20, 27]} calc={calc} />
-      </div>
-
-      <ResultCard title="Hazard context" stale={ctx.stale} error={ctx.errorArgument ? undefined : ctx.error} copyText={copy}>
-        {ctx.result && (
-          <dl class="kv">
-            <dt>Power</dt>
-            <dd>
-              {formatNumber(ctx.result.powerDbm, 4)} dBm = {formatNumber(ctx.result.powerMw, 4)} mW
-            </dd>
-            <dt>Wavelength</dt>
-            <dd>{ctx.result.wavelengthNote}</dd>
-            <dt>Hazard level</dt>
-            <dd class={ctx.result.indicativeLevel ? 'verdict-bad' : undefined}>{ctx.result.levelStatement}</dd>
-          </dl>
-        )}
-      </ResultCard>
-
-      <HazardContextCautions wavelengthNm={wavelength.value} powerDbm={power.value} />
-
-      <h2>Hazard levels and locations</h2>
-      <p>
-        {IEC_60825_2_EDITION} assesses a hazard level at each place where light could come out of a fiber system (a broken cable, an
-        open connector): levels {HAZARD_LEVELS.join(', ')}, in rising order of hazard. The limit for each level depends on wavelength and
-        exposure conditions: look up the limit in the standard as adopted locally.
-      </p>
-      <table>
-        <caption>Highest hazard level allowed by kind of location (IEC 60825-2, as summarised by the Finnish radiation safety authority STUK)</caption>
-        <thead>
-          <tr>
-            <th scope="col">Location</th>
-            <th scope="col">Hazard levels allowed</th>
-          </tr>
-        </thead>
-        <tbody>
-          {(Object.keys(LEVELS_ALLOWED_BY_LOCATION) as (keyof typeof LEVELS_ALLOWED_BY_LOCATION)[]).map((k) => (
-            <tr key={k}>
-              <td>{LOCATION_WORDS[k]}</td>
-              <td>{LEVELS_ALLOWED_BY_LOCATION[k].join(', ')}</td>
+    <CalcScreen
+      headline={headline}
+      status={{ stale: ctx.stale, error: cardError(ctx, [wavelength.argument, power.argument]) }}
+      report={report}
+      inputsTitle="Laser and fiber safety"
+      inputs={
+        <>
+          <section class="safety-cautions" aria-label="The usual cautions">
+            <ul>
+              {USUAL_LASER_CAUTIONS.map((x) => (
+                <li key={x}>{x}</li>
+              ))}
+            </ul>
+          </section>
+          <h3>The light that could come out</h3>
+          <p class="note">Enter the power that could come out of an open fiber end or port here: the transmitter or amplifier output, not the received power.</p>
+          <div class="form">
+            <NumberField q={wavelength} label="Wavelength" unit="nm" quickPicks={[650, 850, 1310, 1490, 1550]} calc={ctx} />
+            <NumberField q={power} label="Optical power" unit="dBm" signed example="such as 10 (or 20 mW)" help="Type dBm, or a value with mW or µW." quickPicks={[0, 10, 20, 27]} calc={ctx} />
+          </div>
+        </>
+      }
+    >
+      {c && (
+        <ResultCard title="Hazard context" stale={ctx.stale}>
+          <HazardContextDetails context={c} />
+          <p class="note">
+            {GOVERNING_STATEMENT} This app never tells you that a level is safe to look at.
+          </p>
+        </ResultCard>
+      )}
+      <ResultCard title="Hazard levels and locations">
+        <p>
+          {IEC_60825_2_EDITION} assesses a hazard level at each place where light could come out of a fiber system, such as a broken cable or an open
+          connector. The levels are {HAZARD_LEVELS.join(', ')}, in rising order of hazard. The limit for each level depends on the wavelength and the
+          exposure conditions: look up the limit in the standard as adopted locally.
+        </p>
+        <table>
+          <caption>Highest hazard level allowed by kind of location (IEC 60825-2, as summarised by the Finnish radiation safety authority STUK)</caption>
+          <thead>
+            <tr>
+              <th scope="col">Location</th>
+              <th scope="col">Hazard levels allowed</th>
             </tr>
-          ))}
-        </tbody>
-      </table>
-      <p class="note">Level 4 is not allowed at any accessible location.</p>
-    </>
+          </thead>
+          <tbody>
+            {(Object.keys(LEVELS_ALLOWED_BY_LOCATION) as (keyof typeof LEVELS_ALLOWED_BY_LOCATION)[]).map((k) => (
+              <tr key={k}>
+                <td>{LOCATION_WORDS[k]}</td>
+                <td>{LEVELS_ALLOWED_BY_LOCATION[k].join(', ')}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+        <p class="note">No kind of location allows level 4.</p>
+      </ResultCard>
+    </CalcScreen>
   );
 }
