@@ -30,12 +30,16 @@ describe('wdmGrid: every input gives a grid point on the grid or a typed error',
   fuzz(M, 'frequencyThzToWavelengthNm', physics.frequencyThzToWavelengthNm, fc.tuple(objectOr(fc.record({ frequencyThz: thz }))), (r) => expectBetween(r, GRID_MIN_NM - 1e-9, GRID_MAX_NM + 1e-9, 'wavelength'));
   fuzz(M, 'wavelengthNmToFrequencyThz', physics.wavelengthNmToFrequencyThz, fc.tuple(objectOr(fc.record({ wavelengthNm: nm }))), (r) => expectBetween(r, 178.9, 238, 'frequency'));
   fuzz(M, 'bandOf', physics.bandOf, fc.tuple(objectOr(fc.record({ wavelengthNm: nm }))));
-  fuzz(M, 'dwdmChannel', physics.dwdmChannel, fc.tuple(objectOr(fc.record({ n: int(-4000, 4000), spacingGHz: spacing }))), checkChannel);
+  fuzz(M, 'dwdmChannel', physics.dwdmChannel, fc.tuple(objectOr(fc.record({ n: int(-4000, 4000), spacingGHz: spacing }))), checkChannel, {
+    // In range: any fixed spacing and n within ±100 (±1.25 to ±10 THz from 193.1 THz, inside 179–238 THz).
+    inRange: fc.tuple(fc.record({ n: fc.integer({ min: -100, max: 100 }), spacingGHz: fc.constantFrom(...DWDM_SPACINGS_GHZ) })),
+    minSuccessShare: 1,
+  });
   fuzz(M, 'nearestDwdmChannel', physics.nearestDwdmChannel, fc.tuple(mixValid(fc.record({ frequencyThz: inRange(180, 237), spacingGHz: fc.constantFrom(...DWDM_SPACINGS_GHZ) }), point.map((p) => ({ ...(p as object), spacingGHz: 50 }) as { frequencyThz: number; spacingGHz: physics.DwdmSpacingGHz }))) as fc.Arbitrary<[Parameters<typeof physics.nearestDwdmChannel>[0]]>, checkNearest);
   fuzz(M, 'dwdmChannelsInBand', physics.dwdmChannelsInBand, fc.tuple(objectOr(fc.record({ band, spacingGHz: spacing }))), (r) => {
     expectCount(r.length, 'channel count');
     r.forEach(checkChannel);
-  });
+  }, { inRange: fc.tuple(fc.record({ band: fc.constantFrom('O', 'E', 'S', 'C', 'L', 'U') as fc.Arbitrary<physics.OpticalBand>, spacingGHz: fc.constantFrom(...DWDM_SPACINGS_GHZ) })), minSuccessShare: 1 });
   fuzz(M, 'flexGridSlot', physics.flexGridSlot, fc.tuple(objectOr(fc.record({ n: int(-3000, 7000), m: int(0, 500) }))), (r) => {
     expectFinitePositive(r.widthGHz, 'slot width');
     if (!(r.lowerEdgeThz < r.centreThz && r.centreThz < r.upperEdgeThz)) throw new Error('edges out of order');
