@@ -267,7 +267,7 @@ export default function Screen() {
         assumptions: [
           `Wavelengths: ${wl.source}.`,
           'Fiber attenuation between listed wavelengths: linear; below the shortest listed: scaled as λ⁻⁴ (Rayleigh scattering).',
-          `Connectors and splices: ${TYPICAL_VALUES.connectorPairSource}; ${TYPICAL_VALUES.spliceSource}.`,
+          `Connector pairs at most ${TYPICAL_VALUES.connectorPairDb.maxDb} dB each and splices at most ${TYPICAL_VALUES.spliceDb.maxDb} dB each: typical installed values, common practice.`,
           'Splitter table: typical, common practice; a data-sheet value replaces it.',
           'Loss budget only: reach and fiber-distance limits of the equipment apply as well.',
         ],
