@@ -24,3 +24,7 @@ export * from './reflectance';
 export * from './pmd';
 export * from './bendOrSplice';
 export * from './equipmentBudget';
+export * from './attenuationSpectrum';
+export * from './ponBudget';
+export * from './wdmGrid';
+export * from './cwdmBudget';
