@@ -6,6 +6,7 @@ import { tasks as bendLossTasks } from './bendLoss/tasks';
 import { tasks as launchTasks } from './launch/tasks';
 import { tasks as dispersionTasks } from './dispersion/tasks';
 import { tasks as encircledFluxTasks } from './encircledFlux/tasks';
+import { tasks as bendOrSpliceTasks } from './bendOrSplice/tasks';
 
 export type Task = (input: never) => unknown;
 
@@ -15,4 +16,5 @@ export const TASKS: Record<string, Task> = {
   ...launchTasks,
   ...dispersionTasks,
   ...encircledFluxTasks,
+  ...bendOrSpliceTasks,
 };

@@ -11,7 +11,7 @@
 import { openDB, type DBSchema, type IDBPDatabase, type IDBPTransaction } from 'idb';
 import { contentSignature, nameKeyOf, newFiberId, type FiberType, type FiberTypeInput } from './model';
 import { fieldChanges } from './differences';
-import { proposeDistinctName } from './names';
+import { compareByName, proposeDistinctName } from './names';
 import { describeErrors, validateInput, validateRecord, type FieldErrors } from './validate';
 
 export const DB_NAME = 'modewright-fiber-library';
@@ -375,7 +375,7 @@ export class FiberStore {
   list(): Promise<FiberType[]> {
     return this.run(async () => {
       const all = await this.db.getAllFromIndex('fiberTypes', 'byNameKey');
-      return all.sort((a, b) => (a.nameKey < b.nameKey ? -1 : a.nameKey > b.nameKey ? 1 : a.id < b.id ? -1 : 1));
+      return all.sort(compareByName);
     });
   }
 

@@ -114,12 +114,16 @@ async function brokenNumbers(page: Page): Promise<string[]> {
   });
 }
 
-/** Sentences of four words or more, as laid out (folded text excluded), that appear more than once. */
+/**
+ * Sentences (four words or more, ending in a full stop, question or exclamation mark) that are laid
+ * out more than once on the page (folded text excluded). Table cells and labels, which may rightly
+ * repeat a value row after row, are not sentences.
+ */
 async function repeatedSentences(page: Page): Promise<string[]> {
   return page.evaluate(() => {
     const text = document.body.innerText;
     const seen = new Map<string, number>();
-    for (const raw of text.split(/(?<=[.!?])\s+|\n+/)) {
+    for (const raw of text.split(/\n+/).flatMap((line) => line.match(/[^.!?]+[.!?]+/g) ?? [])) {
       const s = raw.replace(/\s+/g, ' ').trim();
       if (s.split(' ').length < 4) continue;
       seen.set(s, (seen.get(s) ?? 0) + 1);

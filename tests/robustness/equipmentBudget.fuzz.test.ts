@@ -25,11 +25,22 @@ const input = objectOr(
   fc.record({ limits, losses, designMarginDb: num(-1, 110) }).map(({ limits: l, losses: [lowestLossDb, highestLossDb], designMarginDb }) => ({ limits: l, lowestLossDb, highestLossDb, designMarginDb })),
 );
 
+// What a person can type on the screen: a budget of 0–40 dB, or levels in their order, ordered losses, a margin of 0–10 dB.
+// Every such input must give a verdict.
+const inRangeInput = fc
+  .record({
+    limits: fc.oneof(fc.record({ kind: fc.constant('budget' as const), powerBudgetDb: fc.double({ min: 0, max: 40, noNaN: true }) }), plausible),
+    lowestLossDb: fc.double({ min: 0, max: 60, noNaN: true }),
+    extraDb: fc.double({ min: 0, max: 10, noNaN: true }),
+    designMarginDb: fc.double({ min: 0, max: 10, noNaN: true }),
+  })
+  .map(({ limits: l, lowestLossDb, extraDb, designMarginDb }) => [{ limits: l as physics.EquipmentLimits, lowestLossDb, highestLossDb: lowestLossDb + extraDb, designMarginDb }] as [Parameters<typeof physics.equipmentFit>[0]]);
+
 describe('equipmentBudget: every input gives a verdict with consistent numbers or a typed error', () => {
   reportAfterAll(M);
   fuzz(M, 'equipmentFit', physics.equipmentFit, fc.tuple(input), (r, [i]) => {
     expectClose(r.spareDb, r.powerBudgetDb - i.highestLossDb - i.designMarginDb, 1e-9, 'spare');
     if (r.verdict === 'short' && !(r.shortDb > 0)) throw new Error('short without a shortfall');
     if (r.verdict === 'fits' && !(r.spareDb >= 0)) throw new Error('fits with a negative spare');
-  });
+  }, { inRange: inRangeInput, minSuccessShare: 1 });
 });

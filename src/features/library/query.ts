@@ -8,6 +8,7 @@
 // and describe a thousand records to show fifty.
 import { nameKeyOf, type FiberType } from '../../fibers/model';
 import { validateRecord } from '../../fibers/validate';
+import { compareByName } from '../../fibers/names';
 import { describeType } from './describe';
 
 export type SortOrder = 'name' | 'recent';
@@ -52,11 +53,7 @@ export function rowFacts(r: FiberType): RowFacts {
 }
 
 function byNameKey(a: IndexedType, b: IndexedType): number {
-  const ka = a.record.nameKey ?? '';
-  const kb = b.record.nameKey ?? '';
-  const ia = a.record.id;
-  const ib = b.record.id;
-  return ka < kb ? -1 : ka > kb ? 1 : ia < ib ? -1 : ia > ib ? 1 : 0;
+  return compareByName(a.record, b.record);
 }
 
 /** Builds the search text and the order by name once, per change of the library only. */
