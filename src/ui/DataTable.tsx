@@ -19,14 +19,15 @@ export interface DataTableProps<R> {
 }
 
 /**
- * A table that never breaks a number: with more than three columns it becomes one card per row
- * on a phone (values under their column names); on a wider screen it is an ordinary table.
+ * A table that never breaks a number: with three columns or more it becomes one card per row on a
+ * phone (values beside their column names), so it neither squeezes numbers nor scrolls sideways;
+ * on a wider screen it is an ordinary table.
  */
 export function DataTable<R>({ caption, columns, rows, rowKey, rowClass }: DataTableProps<R>) {
   const [head, ...rest] = columns;
   return (
     <div class="table-wrap">
-      <table class={columns.length > 3 ? 'table-cards' : undefined}>
+      <table class={columns.length > 2 ? 'table-cards' : undefined}>
         <caption>{caption}</caption>
         <thead>
           <tr>

@@ -123,9 +123,11 @@ async function repeatedSentences(page: Page): Promise<string[]> {
   return page.evaluate(() => {
     const text = document.body.innerText;
     const seen = new Map<string, number>();
-    for (const raw of text.split(/\n+/).flatMap((line) => line.match(/[^.!?]+[.!?]+/g) ?? [])) {
+    // A sentence ends at a full stop, question or exclamation mark followed by a space or the line's end
+    // (so the point of "7.5 mm" ends nothing).
+    for (const raw of text.split(/\n+/).flatMap((line) => line.split(/(?<=[.!?])\s+/))) {
       const s = raw.replace(/\s+/g, ' ').trim();
-      if (s.split(' ').length < 4) continue;
+      if (s.split(' ').length < 4 || !/[.!?]$/.test(s)) continue;
       seen.set(s, (seen.get(s) ?? 0) + 1);
     }
     return [...seen.entries()].filter(([, n]) => n > 1).map(([s, n]) => `${n}× "${s}"`);

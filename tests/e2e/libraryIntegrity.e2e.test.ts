@@ -175,7 +175,8 @@ describe('1. a backup record whose name is already saved for a different fiber',
     expect(rowText).toMatch(/already the name of a different fiber/);
     // What differs, in the trade's words: profile and core.
     expect(rowText).toMatch(/profile: graded-index → step-index/i);
-    expect(rowText).toMatch(/core diameter: 62\.5 µm → 50 µm/i);
+    // A value and its unit are joined by a no-break space on screen: \s matches it.
+    expect(rowText).toMatch(/core diameter: 62\.5\s+µm → 50\s+µm/i);
     const choice = preview.getByLabel(`What to do with “${NAME}”`);
     expect(await choice.inputValue()).toBe('keep-both');
     expect(await choice.locator('option:checked').textContent()).toContain(`“${NAME} (2)”`);
@@ -339,7 +340,7 @@ describe('3. the same type edited in two tabs', () => {
     const conflict = tabB.locator('form.fiber-form .edit-conflict');
     await conflict.waitFor();
     expect(await conflict.textContent()).toMatch(/changed in another tab/);
-    expect(await conflict.textContent()).toMatch(/core diameter: 9 µm → 9\.1 µm/i);
+    expect(await conflict.textContent()).toMatch(/core diameter: 9\s+µm → 9\.1\s+µm/i);
     expectSameRecords(await storedRecords(tabB), afterA, 'B refused: A’s edit kept');
 
     // Reload the other version: the form now holds A's values; nothing is written.
@@ -514,6 +515,8 @@ describe('choosing a backup file', () => {
     expect(box.width).toBeGreaterThanOrEqual(44);
     expect(box.height).toBeGreaterThanOrEqual(44);
     expect(await input.evaluate((el) => (el as HTMLInputElement).labels?.[0]?.textContent?.trim())).toBe('Import a backup…');
+    // The control is enabled once the library has opened its store.
+    await expect.poll(() => input.isEnabled()).toBe(true);
     await input.focus();
     // The focus shows on the button a person sees.
     expect(await button.evaluate((el) => getComputedStyle(el).outlineStyle !== 'none' || getComputedStyle(el).boxShadow !== 'none')).toBe(true);
