@@ -41,12 +41,11 @@ export function DataTable<R>({ caption, columns, rows, rowKey, rowClass }: DataT
         <tbody>
           {rows.map((r, i) => (
             <tr key={rowKey(r, i)} class={rowClass?.(r)}>
-              <th scope="row" class={head!.num ? 'num' : undefined}>
-                {head!.cell(r)}
-              </th>
+              <th scope="row">{head!.num ? <span class="num">{head!.cell(r)}</span> : head!.cell(r)}</th>
               {rest.map((c) => (
-                <td key={c.label} data-label={c.label} class={c.num ? 'num' : undefined}>
-                  {c.cell(r)}
+                // The value alone is unbreakable: on a phone the column's name beside it may still wrap.
+                <td key={c.label} data-label={c.label}>
+                  {c.num ? <span class="num">{c.cell(r)}</span> : c.cell(r)}
                 </td>
               ))}
             </tr>

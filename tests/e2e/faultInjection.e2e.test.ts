@@ -135,9 +135,10 @@ async function expectPowerComputes(page: Page, dbm: string, mw: number): Promise
 }
 
 async function vNumberShown(page: Page): Promise<number> {
-  const dd = page.locator('main dd.big').first();
-  await dd.waitFor();
-  return numberIn(await dd.textContent());
+  // The single-mode check leads with V in its headline answer.
+  const value = page.locator('main output .answer-value').first();
+  await value.waitFor();
+  return numberIn(await value.textContent());
 }
 
 // V = 2π a NA / λ (Gloge 1971): for one fiber, V scales as 1/λ, so V(1310)/V(1550) = 1550/1310.
