@@ -66,7 +66,8 @@ describe('saved fiber types in a real browser', () => {
     await waitForScreen(p.page);
     await p.page.locator('.fiber-list').waitFor();
     expect(await listedNames(p.page)).toEqual(['Quarry road spool 3']);
-    expect(await p.page.locator('.fiber-list .fiber-desc').first().textContent()).toContain('core 9 µm, NA 0.13');
+    // A value and its unit are joined by a no-break space on screen.
+    expect((await p.page.locator('.fiber-list .fiber-desc').first().textContent())?.replace(/\s/g, ' ')).toContain('core 9 µm, NA 0.13');
   });
 
   it('a name with markup characters is shown exactly as typed, as text', async () => {

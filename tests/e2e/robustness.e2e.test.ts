@@ -104,6 +104,8 @@ async function fuzzInputs(page: Page, where: string, done: Set<string>): Promise
     const good = await field.inputValue();
     const before = await snapshot(page, id);
     for (const h of HOSTILE) {
+      // A fiber choice folds to one line once it resolves; a person taps it open again to type.
+      await page.$$eval('main details.fiber-picker', (ds) => ds.forEach((d) => ((d as HTMLDetailsElement).open = true)));
       await field.fill(h.text);
       await settle(page);
       inputsTried++;
@@ -121,6 +123,7 @@ async function fuzzInputs(page: Page, where: string, done: Set<string>): Promise
       if (refused && before.results > 0 && s.stale === 0 && s.resultText !== before.resultText) problems.push(`${at}: result changed but is not marked as not current`);
       if (s.stale > 0 && !/Not current/.test(s.text)) problems.push(`${at}: stale result without the words "Not current"`);
     }
+    await page.$$eval('main details.fiber-picker', (ds) => ds.forEach((d) => ((d as HTMLDetailsElement).open = true)));
     await field.fill(good);
     await settle(page);
     const back = await snapshot(page, id);

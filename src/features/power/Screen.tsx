@@ -83,7 +83,8 @@ export default function Screen() {
   const headline: Headline | undefined = c && {
     label: typedLinear ? 'In dBm' : 'In milliwatts',
     value: typedLinear ? dbm(c.dbm, 3) : formatQuantity(c.mw, 'mW', 5),
-    more: ch && !chain.stale ? [{ label: 'At the end of the chain', value: dbm(ch.endDbm) }] : [],
+    // The chain's last good answer stays while the power is being retyped: the headline marks it not current.
+    more: ch ? [{ label: 'At the end of the chain', value: dbm(ch.endDbm) }] : [],
   };
 
   const report: ReportSpec | undefined = c && {
@@ -113,7 +114,7 @@ export default function Screen() {
   return (
     <CalcScreen
       headline={headline}
-      status={{ stale: conversion.stale, error: cardError(conversion, [power.argument]) }}
+      status={{ stale: conversion.stale || chain.stale, error: cardError(conversion, [power.argument]) }}
       report={report}
       powerCaution
       inputsTitle="Power and units"
