@@ -87,12 +87,16 @@ describe('names and notes from an imported file are shown as text', () => {
     // The fiber picker's saved list on a calculator.
     await p.page.evaluate(() => (location.hash = '#/single-mode'));
     await waitForScreen(p.page);
+    // The chosen fiber is folded to one line: tap it open, as a person would.
+    await p.page.locator('main details.fiber-picker > summary').first().click();
     await p.page.locator('#single-mode-source').selectOption('saved');
     const options = p.page.locator('#single-mode-saved option');
     await options.first().waitFor({ state: 'attached' });
     expect(await options.allTextContents()).toEqual([QUOTE_NAME, ENTITY_NAME]);
     expect(await options.evaluateAll((os) => os.map((o) => o.childElementCount))).toEqual([0, 0]);
     await p.page.locator('#single-mode-saved').selectOption({ label: QUOTE_NAME });
+    // The one-line summary of the chosen fiber shows the name as text too.
+    await expect.poll(() => p.page.locator('main details.fiber-picker .picker-line .user-text').first().textContent()).toBe(QUOTE_NAME);
     expect(await p.page.locator('main').textContent()).not.toMatch(/NaN|Infinity/);
     expect(await parsedMarkupCount(p.page)).toBe(0);
 
