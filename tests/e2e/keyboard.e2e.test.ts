@@ -153,7 +153,9 @@ describe('typed units', () => {
       try {
         await page.goto(`${server.url}#/${id}`);
         await waitForScreen(page);
-        const fieldId = await page.locator('input[id$="avelengthNm"]:visible').first().getAttribute('id');
+        // A field in view first (a folded fiber choice hides its own); otherwise the first in the page.
+        const inView = page.locator('input[id$="avelengthNm"]:visible');
+        const fieldId = await ((await inView.count()) > 0 ? inView : page.locator('input[id$="avelengthNm"]')).first().getAttribute('id');
         expect(fieldId, 'the screen has a wavelength field').toBeTruthy();
         const field = page.locator(`#${fieldId}`);
         const results = page.locator('main output, main .result-card');
