@@ -78,7 +78,7 @@ export const PON_WAVELENGTHS: Readonly<Record<PonGeneration, { downstreamNm: num
   'XGS-PON': { downstreamNm: 1577, upstreamNm: 1270, source: 'G.9807.1 Annex B: downstream 1575–1580 nm, upstream 1260–1280 nm (from memory)' },
 };
 
-/** A video overlay's downstream wavelength, 1550 nm (1550–1560 nm band of G.983.3, from memory; centre common practice). */
+/** An RF broadcast overlay's downstream wavelength, 1550 nm (1550–1560 nm band of G.983.3, from memory; centre common practice). */
 export const VIDEO_OVERLAY_NM = 1550;
 /** Overlay wavelengths accepted: the C and L bands, where overlays sit (common practice). */
 export const VIDEO_OVERLAY_RANGE_NM = { min: 1530, max: 1625 } as const;
@@ -179,14 +179,14 @@ export interface PonPlanInput {
   splitters: SplitterStage[];
   connectorPairs: number;
   splices: number;
-  /** Fixed losses in every path: a WDM coupler for a video overlay, an attenuator. */
+  /** Fixed losses in every path: a WDM coupler for an RF broadcast overlay, an attenuator. */
   extras?: PonExtra[];
   /** Reserve kept for repairs and ageing, added to the farthest home's loss only. */
   reserveDb: number;
   /** The fiber type's listed attenuation. */
   attenuationDbPerKm: AttenuationAt[];
-  /** Add a video overlay's downstream wavelength to the check. */
-  videoOverlay?: boolean;
+  /** Add an RF broadcast overlay's downstream wavelength to the check. */
+  broadcastOverlay?: boolean;
   /** The overlay's wavelength, nm; default 1550 nm (VIDEO_OVERLAY_NM). */
   overlayWavelengthNm?: number;
   /** Connector and splice allowances; default: typical installed values (linkBudget.ts). */
@@ -320,7 +320,7 @@ function check(input: PonPlanInput): Checked {
       : requireNumber('overlayWavelengthNm', input.overlayWavelengthNm, { ...VIDEO_OVERLAY_RANGE_NM, unit: 'nm', hint: (v) => (v >= 1.53 && v <= 1.625 ? `did you mean ${v * 1000} nm?` : undefined) });
   const wavelengths: Checked['wavelengths'] = [
     { direction: 'downstream', wavelengthNm: wl.downstreamNm },
-    ...(input.videoOverlay ? [{ direction: 'downstream' as const, wavelengthNm: overlayNm }] : []),
+    ...(input.broadcastOverlay ? [{ direction: 'downstream' as const, wavelengthNm: overlayNm }] : []),
     { direction: 'upstream', wavelengthNm: wl.upstreamNm },
   ];
   const ruleSet = input.ruleSet ?? TYPICAL_VALUES;
@@ -472,7 +472,7 @@ export function ponBudget(input: PonPlanInput): PonPlanResult {
 
   const notes = [
     `Class ${lossClass.name} (${lossClass.generation}): ${fmt(lossClass.minDb)} to ${fmt(lossClass.maxDb)} dB — ${lossClass.source}.`,
-    `Wavelengths: ${PON_WAVELENGTHS[c.generation].source}${c.wavelengths.length > 2 ? `; video overlay ${c.wavelengths[1]!.wavelengthNm} nm` : ''}.`,
+    `Wavelengths: ${PON_WAVELENGTHS[c.generation].source}${c.wavelengths.length > 2 ? `; RF broadcast overlay ${c.wavelengths[1]!.wavelengthNm} nm` : ''}.`,
     ...c.splitters.map((s) => `Splitter ${s.basis}.`),
     ...ds.map((d) => `Fiber at ${d.wavelengthNm} nm: ${fmt(d.attenuation.dbPerKm)} dB/km, ${d.attenuation.how}.`),
     `Connectors and splices: ${c.ruleSet.connectorPairSource}; ${c.ruleSet.spliceSource}.`,

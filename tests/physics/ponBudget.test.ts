@@ -176,11 +176,11 @@ describe('checks at both ends', () => {
     expectDb(b.tightest.maxLossDb - a.tightest.maxLossDb, 1, 'reserve added to the maximum');
     expectDb(b.tightest.minLossDb, a.tightest.minLossDb, 'minimum unchanged');
   });
-  it('a video overlay adds the 1550 nm downstream check', () => {
-    const r = ponBudget(plan({ videoOverlay: true, extras: [{ label: 'WDM coupler', lossDb: 0.8 }] }));
+  it('an RF broadcast overlay adds the 1550 nm downstream check', () => {
+    const r = ponBudget(plan({ broadcastOverlay: true, extras: [{ label: 'WDM coupler', lossDb: 0.8 }] }));
     expect(r.directions.map((d) => d.wavelengthNm)).toEqual([1490, 1550, 1310]);
-    expect(ponBudget(plan({ videoOverlay: true, overlayWavelengthNm: 1555 })).directions[1]!.wavelengthNm).toBe(1555);
-    expect(() => ponBudget(plan({ videoOverlay: true, overlayWavelengthNm: 1310 }))).toThrow(/1530 to 1625 nm/);
+    expect(ponBudget(plan({ broadcastOverlay: true, overlayWavelengthNm: 1555 })).directions[1]!.wavelengthNm).toBe(1555);
+    expect(() => ponBudget(plan({ broadcastOverlay: true, overlayWavelengthNm: 1310 }))).toThrow(/1530 to 1625 nm/);
   });
   it('XGS-PON checks 1577 nm down and 1270 nm up (below the listed 1310 nm: λ⁻⁴ scaling)', () => {
     const r = ponBudget(plan({ generation: 'XGS-PON', className: 'N1' }));

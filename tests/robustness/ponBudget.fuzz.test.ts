@@ -36,7 +36,7 @@ const hostile = objectOr(
     extras: maybe(fc.oneof(fc.array(extra, { maxLength: 3 }), notANumber as fc.Arbitrary<physics.PonExtra[]>)),
     reserveDb: num(0, 80),
     attenuationDbPerKm: list,
-    videoOverlay: maybe(fc.boolean()),
+    broadcastOverlay: maybe(fc.boolean()),
     overlayWavelengthNm: maybe(num(1400, 1700)),
   }),
 ) as fc.Arbitrary<physics.PonPlanInput>;
@@ -55,7 +55,7 @@ const valid = fc
       extras: maybe(fc.array(fc.record({ label: fc.string({ maxLength: 8 }), lossDb: inRange(0, 2) }), { maxLength: 2 })),
       reserveDb: inRange(0, 3),
       attenuationDbPerKm: fc.constant(g652d),
-      videoOverlay: maybe(fc.boolean()),
+      broadcastOverlay: maybe(fc.boolean()),
       overlayWavelengthNm: maybe(inRange(1530, 1625)),
     }),
   ) as fc.Arbitrary<physics.PonPlanInput>;

@@ -135,7 +135,7 @@ export default function Screen() {
       extras: extraDb > 0 ? [{ label: 'WDM coupler or other element', lossDb: extraDb }] : [],
       reserveDb: need(reserve),
       attenuationDbPerKm: fiber.attenuationDbPerKm,
-      videoOverlay: overlay,
+      broadcastOverlay: overlay,
       overlayWavelengthNm: need(overlayNm),
     });
   }, [
@@ -185,7 +185,7 @@ export default function Screen() {
       ['Splices', shownValue(splices, '')],
       ['Extra element', shownValue(extra, 'dB')],
       ['Reserve', shownValue(reserve, 'dB')],
-      ['Video overlay', overlay ? `yes (${shownValue(overlayNm, 'nm')})` : 'no'],
+      ['RF broadcast overlay', overlay ? `yes (${shownValue(overlayNm, 'nm')})` : 'no'],
     ],
     outputs: [
       ['Verdict', r.headline],
@@ -253,10 +253,10 @@ export default function Screen() {
             <NumberField q={reserve} label="Reserve for repairs and ageing" unit="dB" quickPicks={[0, 1, 2]} calc={state} example="such as 1" />
             <div class="field">
               <label>
-                <input type="checkbox" checked={overlay} onChange={(e) => setOverlay((e.currentTarget as HTMLInputElement).checked)} /> Check a video overlay downstream too
+                <input type="checkbox" checked={overlay} onChange={(e) => setOverlay((e.currentTarget as HTMLInputElement).checked)} /> Check an RF broadcast overlay downstream too
               </label>
             </div>
-            <NumberField q={overlayNm} label="Video overlay wavelength" unit="nm" quickPicks={[1550, 1555]} calc={state} example="such as 1550" help="Used when the box above is ticked." />
+            <NumberField q={overlayNm} label="RF broadcast overlay wavelength" unit="nm" quickPicks={[1550, 1555]} calc={state} example="such as 1550" help="Used when the box above is ticked." />
           </div>
         </>
       }
