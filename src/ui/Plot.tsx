@@ -78,13 +78,20 @@ function useFigureWidth(): [RefObject<HTMLElement>, number] {
   return [ref, width];
 }
 
-/** An axis label in one line, or two when it is wider than the room it has. */
+/** An axis label in one line, or as many as it needs to stay inside `room` pixels, broken only between words. */
 function splitLabel(label: string, room: number): string[] {
   if (textWidth(label, PLOT_LABEL_PX) <= room) return [label];
-  const mid = label.length / 2;
-  let best = -1;
-  for (let i = 0; i < label.length; i++) if (label[i] === ' ' && (best < 0 || Math.abs(i - mid) < Math.abs(best - mid))) best = i;
-  return best < 0 ? [label] : [label.slice(0, best), label.slice(best + 1)];
+  const lines: string[] = [];
+  let line = '';
+  for (const word of label.split(' ')) {
+    const joined = line ? `${line} ${word}` : word;
+    if (line && textWidth(joined, PLOT_LABEL_PX) > room) {
+      lines.push(line);
+      line = word;
+    } else line = joined;
+  }
+  if (line) lines.push(line);
+  return lines;
 }
 
 /** Tick text: a decade on a log axis is written 10⁻⁶, short enough for a phone. */
@@ -124,8 +131,8 @@ function frameFor(W: number, xLabel: string, yLabel: string, yTickTexts: string[
   const top = 12;
   const bottom = 8 + PLOT_TICK_PX + 8 + xLines.length * (PLOT_LABEL_PX + 4) + 2;
   let H = Math.round(Math.min(380, Math.max(260, W * 0.62)));
-  // The rotated y label runs along the plot's height: two lines if it would not fit in one,
-  // and a taller plot if even two would not.
+  // The rotated y label runs along the plot's height: more lines if it would not fit in one,
+  // and a taller plot if a single word would not.
   let yLines = splitLabel(yLabel, H - top - bottom - 8);
   const need = Math.max(...yLines.map((l) => textWidth(l, PLOT_LABEL_PX))) + 8;
   if (need > H - top - bottom) {

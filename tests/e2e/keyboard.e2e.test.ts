@@ -142,10 +142,25 @@ describe('keyboard alone, a fiber check', () => {
 
 describe('typed units', () => {
   // The fiber types list has no wavelength field until a form is opened; the power screen takes
-  // no wavelength, and the link budget ticks the fiber type's listed wavelengths instead of typing one.
+  // no wavelength; the link budget ticks the fiber type's listed wavelengths instead of typing one;
+  // "Bend or splice?" reads the event at the fixed OTDR wavelengths 1310, 1550 and 1625 nm; PMD is
+  // a delay with no wavelength in its formula; and the Ethernet screen takes each application's own.
   // Every other screen has at least one, and the first (by id ending in "avelengthNm") is tried.
-  const NO_TYPED_WAVELENGTH = ['library', 'power', 'link-budget'];
+  const NO_TYPED_WAVELENGTH = ['library', 'power', 'link-budget', 'bend-or-splice', 'pmd', 'link-applications'];
   const withWavelength = FEATURES.filter((f) => !NO_TYPED_WAVELENGTH.includes(f.id));
+  it('the screens said to take no typed wavelength are real screens and have no wavelength field', async () => {
+    const page = await context.newPage();
+    try {
+      for (const id of NO_TYPED_WAVELENGTH) {
+        expect(FEATURES.map((f) => f.id), `${id} is a screen`).toContain(id);
+        await page.goto(`${server.url}#/${id}`);
+        await waitForScreen(page);
+        expect(await page.locator('input[id$="avelengthNm"]').count(), `${id} has no wavelength field`).toBe(0);
+      }
+    } finally {
+      await page.close();
+    }
+  });
   it.for(withWavelength.map((f) => ({ id: f.id, title: f.title })))(
     'on the $title screen, a wavelength typed as "1,55 µm" is read as 1550 nm and gives the same result as 1550',
     async ({ id }) => {
