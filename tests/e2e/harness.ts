@@ -58,6 +58,12 @@ export interface ContextOptions {
   /** Only for injecting test tools such as axe-core; the app's own CSP checks run without it. */
   bypassCSP?: boolean;
   colorScheme?: 'light' | 'dark';
+  /**
+   * newContext blocks the service worker unless asked: a context made for one check would otherwise
+   * install it and fetch the whole precache in the background, taking the CPU from the check on a
+   * two-core machine. The offline and update tests ask for it (and freshProfile always has it).
+   */
+  serviceWorkers?: 'allow' | 'block';
 }
 
 export const PHONE: Viewport = { width: 360, height: 740 };
@@ -69,7 +75,7 @@ export async function newContext(browser: Browser, opts: ContextOptions = {}): P
     offline: opts.offline ?? false,
     bypassCSP: opts.bypassCSP ?? false,
     colorScheme: opts.colorScheme ?? 'light',
-    serviceWorkers: 'allow',
+    serviceWorkers: opts.serviceWorkers ?? 'block',
   });
   return context;
 }

@@ -155,7 +155,7 @@ describe('nothing leaves the app’s origin', () => {
     const server = await serve(BUILDS.current);
     const browser = await launchBrowser();
     later(() => browser.close());
-    const context = await newContext(browser);
+    const context = await newContext(browser, { serviceWorkers: 'allow' });
     const requests = watchForeignRequests(context, server.origin);
     const csp = await watchCspViolations(context);
     const page = await context.newPage();
@@ -180,7 +180,7 @@ describe('nothing leaves the app’s origin', () => {
     const server = await serve(BUILDS.current);
     const browser = await launchBrowser();
     later(() => browser.close());
-    const context = await newContext(browser, { bypassCSP: true });
+    const context = await newContext(browser, { bypassCSP: true, serviceWorkers: 'allow' });
     const requests = watchForeignRequests(context, server.origin);
     const page = await context.newPage();
     await page.goto(server.url);
@@ -200,7 +200,7 @@ describe('nothing leaves the app’s origin', () => {
     const server = await serve(BUILDS.current);
     const browser = await launchBrowser();
     later(() => browser.close());
-    const context = await newContext(browser);
+    const context = await newContext(browser, { serviceWorkers: 'allow' });
     const csp = await watchCspViolations(context);
     const page = await context.newPage();
     await page.goto(server.url);
