@@ -16,13 +16,20 @@ import { BACKUP_FORMAT_ID, BACKUP_FORMAT_VERSION } from '../../src/fibers/backup
 
 const { serve, profile, later } = closedAfterEach();
 
+/**
+ * The storage faults (storage full, no IndexedDB, a tab closed mid-save) concern IndexedDB alone: their
+ * browsers block the service worker, which would otherwise install and fill its cache meanwhile. The
+ * offline and update tests keep it.
+ */
+const STORAGE_ONLY = { serviceWorkers: 'block' } as const;
+
 
 
 /**
  * One user-data-dir that can be closed and opened again: the same phone, with the browser quit
  * and started between two visits (an init script added to one session is gone in the next).
  */
-function reusableProfile(): { open(): Promise<BrowserContext> } {
+function reusableProfile(serviceWorkers: 'allow' | 'block' = 'allow'): { open(): Promise<BrowserContext> } {
   const dir = mkdtempSync(join(tmpdir(), 'modewright-fault-profile-'));
   let current: BrowserContext | undefined;
   later(async () => {
@@ -37,7 +44,7 @@ function reusableProfile(): { open(): Promise<BrowserContext> } {
         args: CHROMIUM_ARGS,
         viewport: PHONE,
         colorScheme: 'light',
-        serviceWorkers: 'allow',
+        serviceWorkers,
       });
       return current;
     },
@@ -296,7 +303,7 @@ describe('storage full during a save', () => {
     'quota exceeded (%s): the form says storage is full and nothing was saved, the saved types stay as they were, and without the fault the library is intact',
     async (mode) => {
       const server = await serve();
-      const phone = reusableProfile();
+      const phone = reusableProfile(STORAGE_ONLY.serviceWorkers);
 
       // Visit 1, no fault: three types saved.
       let page = await firstPage(await phone.open());
@@ -367,7 +374,7 @@ describe('no IndexedDB at all', () => {
     '%s: the calculators compute, the library screen says in plain words that saving is off, and no error escapes',
     async (fault) => {
       const server = await serve();
-      const p = await profile();
+      const p = await profile(STORAGE_ONLY);
       await p.context.addInitScript(faults[fault]);
       const errors = watchPageErrors(p.page);
       const rejections: string[] = [];
@@ -430,7 +437,7 @@ const BATCH_SIZE = 600;
 describe('the tab is closed during a save', () => {
   it(`closing the tab 0 to 500 ms after confirming an import of ${BATCH_SIZE} types, and halfway through its writes: on reopening the library holds either all of them or none, each complete, and the earlier types unchanged`, async () => {
     const server = await serve();
-    const p = await profile();
+    const p = await profile(STORAGE_ONLY);
     // Counts the writes issued on the page; when asked, write number __stallAt stalls the page for
     // 3 s (a slow phone), so the last round closes the tab for certain in the middle of the
     // import's one transaction, with half of its writes issued.
@@ -504,7 +511,7 @@ describe('the tab is closed during a save', () => {
 
   it('closing the tab 0 to 50 ms after pressing Save: the new type is either fully there or not there, and the earlier types unchanged', async () => {
     const server = await serve();
-    const p = await profile();
+    const p = await profile(STORAGE_ONLY);
     let page = p.page;
     await openLibrary(page, server.url);
     await saveThreeTypes(page);

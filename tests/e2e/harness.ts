@@ -96,6 +96,7 @@ export interface FreshProfile {
 
 /**
  * A whole browser on a new, empty user-data-dir: what a person's phone has on first visit.
+ * The service worker is allowed unless `serviceWorkers: 'block'` is asked (a storage-only check).
  * Used where the browser profile matters (service worker install, installability:
  * Chromium does not offer installation in off-the-record contexts).
  */
@@ -108,7 +109,7 @@ export async function freshProfile(opts: ContextOptions = {}): Promise<FreshProf
     offline: opts.offline ?? false,
     bypassCSP: opts.bypassCSP ?? false,
     colorScheme: opts.colorScheme ?? 'light',
-    serviceWorkers: 'allow',
+    serviceWorkers: opts.serviceWorkers ?? 'allow',
   });
   const page = context.pages()[0] ?? (await context.newPage());
   return {
