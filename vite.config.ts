@@ -71,6 +71,20 @@ function topLevelManifest(): Plugin {
   };
 }
 
+// The physics modules do nothing when imported (pure functions and constants, no DOM; see DEVELOPERS.md).
+// Saying so lets the bundler follow the src/physics/index.ts barrel to the modules a screen really uses:
+// without it, every screen that imports the barrel shared one chunk holding all of the physics.
+function purePhysics(): Plugin {
+  const dir = fileURLToPath(new URL('./src/physics/', import.meta.url));
+  return {
+    name: 'modewright-pure-physics',
+    transform(code, id) {
+      if (!id.startsWith(dir)) return null;
+      return { code, map: null, moduleSideEffects: false };
+    },
+  };
+}
+
 export default defineConfig({
   define: {
     __APP_VERSION__: JSON.stringify(pkg.version),
@@ -78,6 +92,7 @@ export default defineConfig({
   },
   plugins: [
     preact(),
+    purePhysics(),
     contentSecurityPolicy(),
     topLevelManifest(),
     VitePWA({

@@ -11,7 +11,6 @@ import { presetsOfKinds, findPreset, type FiberKind } from '../fibers/presets';
 import { kindOfSaved, resolveLabel, resolvePreset, resolveSaved, resolveTyped } from '../fibers/resolve';
 import type { ResolvedFiber } from '../fibers/resolved';
 import type { FiberType } from '../fibers/model';
-import { getFiberStore } from '../fibers/db';
 import { validateRecord } from '../fibers/validate';
 
 export interface FiberPickerOptions {
@@ -82,7 +81,10 @@ export function useSavedFiberTypes(): { types: FiberType[] | undefined; error: s
   useEffect(() => {
     let live = true;
     let off: (() => void) | undefined;
-    getFiberStore()
+    // The store (and the IndexedDB wrapper under it) loads after the screen: a calculator opens on a
+    // standard category, and its first answer need not wait for the library code.
+    import('../fibers/db')
+      .then(({ getFiberStore }) => getFiberStore())
       .then((store) => {
         const load = () =>
           store.list().then(
