@@ -34,7 +34,8 @@ await build({
     },
   },
 });
-runNode('dist-bench/node/all.mjs');
+// BENCH_ONLY (start, typing or library) runs one group of browser figures and skips the Node benchmarks.
+if (!process.env.BENCH_ONLY) runNode('dist-bench/node/all.mjs');
 
 ensureChromium();
 await build({ root, logLevel: 'warn', build: { outDir: appDir, emptyOutDir: true } });
