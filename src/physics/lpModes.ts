@@ -206,6 +206,14 @@ function solveInBracket(l: number, m: number, v: number, cutoffV: number, upper:
 }
 
 /**
+ * An LP mode's name: LP01, LP11 — and with a comma once an index has two digits, LP10,1 or
+ * LP1,10, so LP101 is never ambiguous (common practice in mode tables, as in LP_{10,1}).
+ */
+export function lpName(l: number, m: number): string {
+  return l >= 10 || m >= 10 ? `LP${l},${m}` : `LP${l}${m}`;
+}
+
+/**
  * LP_lm at normalized frequency v. Throws ModelError when the mode is not guided (v ≤ cutoffV).
  */
 export function solveLpMode(l: number, m: number, v: number): LPMode {
@@ -216,7 +224,7 @@ export function solveLpMode(l: number, m: number, v: number): LPMode {
   const cutoffV = cutoffUnchecked(l, m);
   if (v <= cutoffV) {
     throw new ModelError(
-      `LP${l}${m} is not guided at V = ${v}: it is cut off at V = ${cutoffV.toFixed(4)}`,
+      `${lpName(l, m)} is not guided at V = ${v}: it is cut off at V = ${cutoffV.toFixed(4)}`,
       'Gloge 1971 LP modes',
       'a mode is guided only above its cutoff V; raise V (shorter wavelength, larger core or NA)',
     );

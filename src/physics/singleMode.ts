@@ -2,7 +2,7 @@
 // and how far is it from the LP11 cutoff?
 import { InputError, requireWavelengthNm } from './errors';
 import { naFromDelta, numericalAperture, requireCoreRadiusUm, requireNa, requireRefractiveIndex, NM_PER_UM } from './fiber';
-import { LP11_CUTOFF_V, lpModes, totalModeCount, type LPMode } from './lpModes';
+import { LP11_CUTOFF_V, lpModes, lpName, totalModeCount, type LPMode } from './lpModes';
 
 /** One of three ways to give the index contrast. */
 export type IndexContrast =
@@ -71,7 +71,7 @@ function percent(x: number): string {
 }
 
 function modeList(modes: readonly LPMode[]): string {
-  const names = modes.map((m) => `LP${m.l}${m.m}`);
+  const names = modes.map((m) => lpName(m.l, m.m));
   return names.length <= 6 ? names.join(', ') : `${names.slice(0, 5).join(', ')} and ${names.length - 5} more`;
 }
 
@@ -104,7 +104,7 @@ export function singleModeCheck(input: SingleModeInput): SingleModeCheck {
       `${total} modes counting polarizations and orientations; single-mode only above ${lp11CutoffWavelengthNm.toFixed(0)} nm.`;
   }
   const near = modes.find((m) => m.nearCutoff);
-  if (near) summary += ` LP${near.l}${near.m} is right at its cutoff: it is barely guided and easily lost.`;
+  if (near) summary += ` ${lpName(near.l, near.m)} is right at its cutoff: it is barely guided and easily lost.`;
   return {
     v,
     na,

@@ -51,10 +51,5 @@ function trimZeros(s: string): string {
   return s.includes('.') ? s.replace(/\.?0+$/, '') : s;
 }
 
-/**
- * An LP mode's name: LP01, LP11 — and with a comma once an index has two digits, LP10,1 or
- * LP1,10, so LP101 is never ambiguous (common practice in mode tables).
- */
-export function lpName(l: number, m: number): string {
-  return l >= 10 || m >= 10 ? `LP${l},${m}` : `LP${l}${m}`;
-}
+/** An LP mode's name (LP01, LP10,1): defined with the modes, so the physics' own sentences use it too. */
+export { lpName } from '../physics';

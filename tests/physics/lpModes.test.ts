@@ -92,6 +92,10 @@ describe('vector-mode families (Gloge 1971, mode designations)', () => {
 });
 
 describe('at and near cutoff', () => {
+  it('a mode below its cutoff is refused in words that name it unambiguously: LP10,1 (cut off at j9,1 = 13.3543, A&S Table 9.5)', () => {
+    expect(() => solveLpMode(10, 1, 5)).toThrow(/^LP10,1 is not guided at V = 5: it is cut off at V = 13\.3543/);
+  });
+
   it('a mode exactly at its cutoff is not guided', () => {
     expect(() => solveLpMode(1, 1, LP11_CUTOFF_V)).toThrow(ModelError);
     expect(lpModes(LP11_CUTOFF_V).map(key)).toEqual(['LP0,1']);

@@ -99,3 +99,19 @@ describe('bad input to the single-mode check is refused with a typed, explained 
     expect(call).toThrow(message);
   });
 });
+
+describe('mode names in the summary a technician reads', () => {
+  // V just above the cutoff of LP10,1: the first zero of J9, j9,1 = 13.35430 (A&S Table 9.5;
+  // 13.354300477435 from scipy.special.jn_zeros(9, 1)), so LP10,1 is the mode right at its cutoff.
+  const J9_1 = 13.354300477435;
+  const a = 25;
+  const wavelengthNm = 1000;
+  const na = ((J9_1 + 2e-7) * (wavelengthNm / 1000)) / (2 * Math.PI * a);
+
+  it('a mode with a two-digit index is named with a comma, "LP10,1", never the ambiguous "LP101"', () => {
+    const check = singleModeCheck({ coreRadiusUm: a, na, wavelengthNm });
+    expect(check.v).toBeCloseTo(J9_1, 6);
+    expect(check.summary).toContain('LP10,1 is right at its cutoff');
+    expect(check.summary).not.toMatch(/LP\d{3}/);
+  });
+});
