@@ -9,10 +9,8 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { chromium, type BrowserContext, type Page } from 'playwright-core';
-import { BUILDS, CHROMIUM_ARGS, CHROMIUM_PATH, closedAfterEach, PHONE, UPDATE_OFFER, waitForScreen, waitForServiceWorkerControl } from './harness';
-import { DB_NAME } from '../../src/fibers/db';
+import { BUILDS, CHROMIUM_ARGS, CHROMIUM_PATH, closedAfterEach, PHONE, storedRecords, UPDATE_OFFER, waitForScreen, waitForServiceWorkerControl, type StoredRecord } from './harness';
 import { BACKUP_FORMAT_ID, BACKUP_FORMAT_VERSION } from '../../src/fibers/backup';
-
 
 const { serve, profile, later } = closedAfterEach();
 
@@ -60,35 +58,6 @@ function watchPageErrors(page: Page): string[] {
   const errors: string[] = [];
   page.on('pageerror', (e) => errors.push(`${e.name}: ${e.message}`));
   return errors;
-}
-
-type StoredRecord = Record<string, unknown> & { id: string; name: string; updatedAt: number };
-
-/** Every saved fiber type, read straight from IndexedDB in the page (no app code), sorted by id. */
-async function storedRecords(page: Page): Promise<StoredRecord[]> {
-  const records = await page.evaluate(
-    (dbName) =>
-      new Promise<Record<string, unknown>[]>((resolve, reject) => {
-        const req = indexedDB.open(dbName);
-        req.onerror = () => reject(req.error);
-        req.onsuccess = () => {
-          const db = req.result;
-          if (!db.objectStoreNames.contains('fiberTypes')) {
-            db.close();
-            resolve([]);
-            return;
-          }
-          const all = db.transaction('fiberTypes').objectStore('fiberTypes').getAll();
-          all.onsuccess = () => {
-            db.close();
-            resolve(all.result as Record<string, unknown>[]);
-          };
-          all.onerror = () => reject(all.error);
-        };
-      }),
-    DB_NAME,
-  );
-  return (records as StoredRecord[]).sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
 }
 
 /**

@@ -1,29 +1,15 @@
 // Field tools in real Chromium on the production build: the screens where optical power is entered show a
 // compact caution line, the laser-safety screen the full cautions first and the hazard context once; no screen
 // text suggests a level is all right to look at or says a sentence twice; the dispersion screen draws D(λ).
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { BUILDS, PHONE, launchBrowser, newPage, openScreen, startServer, type StaticServer } from './harness';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { sharedBrowser } from './harness';
 
 // Same list as tests/physics/laserSafety.test.ts: phrasing that would suggest a power is all right to look at.
 const FORBIDDEN = /safe to (look|view|stare|see)|eye[- ]?safe|harmless|no (eye )?hazard|safe for (the )?eyes?|\bis safe\b|\bare safe\b|safe level|safely (look|view)/i;
 
-let browser: Browser;
-let server: StaticServer;
-beforeAll(async () => {
-  server = await startServer(BUILDS.current);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
-
-async function open(id: string): Promise<Page> {
-  const page = await newPage(browser, { viewport: PHONE });
-  await openScreen(page, server.url, id);
-  return page;
-}
+const shared = sharedBrowser();
+const open = (id: string) => shared.open(id);
 
 async function mainText(page: Page): Promise<string> {
   return (await page.locator('main').innerText()).replace(/\s+/g, ' ');

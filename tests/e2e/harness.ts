@@ -8,7 +8,8 @@ import { extname, join, resolve, sep } from 'node:path';
 import type { AddressInfo } from 'node:net';
 import { fileURLToPath } from 'node:url';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
-import { afterEach } from 'vitest';
+import { afterAll, afterEach, beforeAll } from 'vitest';
+import { DB_NAME } from '../../src/fibers/db';
 
 export const REPO_ROOT = fileURLToPath(new URL('../../', import.meta.url));
 
@@ -327,4 +328,77 @@ export function closedAfterEach(): TestResources {
       return p;
     },
   };
+}
+
+export interface SharedBrowser {
+  readonly browser: Browser;
+  readonly server: StaticServer;
+  /** A new page, in a context of its own (a phone unless said), showing screen `id`; `clipboard` grants copy and paste. */
+  open(id: string, opts?: ContextOptions & { clipboard?: boolean }): Promise<Page>;
+}
+
+/**
+ * One browser and one server of the current build for a whole test file: call once at its top. They
+ * start before the file's first test and close after its last.
+ */
+export function sharedBrowser(): SharedBrowser {
+  let browser: Browser | undefined;
+  let server: StaticServer | undefined;
+  beforeAll(async () => {
+    server = await startServer(BUILDS.current);
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.close();
+  });
+  const started = () => {
+    if (!browser || !server) throw new Error('sharedBrowser() is used before its file started');
+    return { browser, server };
+  };
+  return {
+    get browser() {
+      return started().browser;
+    },
+    get server() {
+      return started().server;
+    },
+    async open(id, { clipboard, ...opts } = {}) {
+      const { browser: b, server: s } = started();
+      const page = await newPage(b, { viewport: PHONE, ...opts });
+      if (clipboard) await page.context().grantPermissions(['clipboard-read', 'clipboard-write'], { origin: s.url });
+      await openScreen(page, s.url, id);
+      return page;
+    },
+  };
+}
+
+/** A saved fiber type as IndexedDB holds it. */
+export type StoredRecord = Record<string, unknown> & { id: string; name: string; updatedAt: number };
+
+/** Every saved fiber type, read straight from IndexedDB in the page (no app code), sorted by id. */
+export async function storedRecords(page: Page): Promise<StoredRecord[]> {
+  const records = await page.evaluate(
+    (dbName) =>
+      new Promise<Record<string, unknown>[]>((resolve, reject) => {
+        const req = indexedDB.open(dbName);
+        req.onerror = () => reject(req.error);
+        req.onsuccess = () => {
+          const db = req.result;
+          if (!db.objectStoreNames.contains('fiberTypes')) {
+            db.close();
+            resolve([]);
+            return;
+          }
+          const all = db.transaction('fiberTypes').objectStore('fiberTypes').getAll();
+          all.onsuccess = () => {
+            db.close();
+            resolve(all.result as Record<string, unknown>[]);
+          };
+          all.onerror = () => reject(all.error);
+        };
+      }),
+    DB_NAME,
+  );
+  return (records as StoredRecord[]).sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
 }

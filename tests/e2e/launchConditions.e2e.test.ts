@@ -1,26 +1,12 @@
 // The multimode launch-condition screens in real Chromium on the production build, at phone size: the verdict
 // is read from the headline <output>, which is in view without scrolling; the physics behind it is computed in
 // the worker (tests/physics/encircledFlux.test.ts checks the numbers themselves).
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { BUILDS, PHONE, launchBrowser, newPage, openScreen, startServer, watchForeignRequests, type StaticServer } from './harness';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { PHONE, newPage, openScreen, sharedBrowser, watchForeignRequests } from './harness';
 
-let browser: Browser;
-let server: StaticServer;
-beforeAll(async () => {
-  server = await startServer(BUILDS.current);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
-
-async function open(id: string): Promise<Page> {
-  const page = await newPage(browser, { viewport: PHONE });
-  await openScreen(page, server.url, id);
-  return page;
-}
+const shared = sharedBrowser();
+const open = (id: string) => shared.open(id);
 
 const headline = (page: Page) => page.locator('output.headline').innerText().then((t) => t.replace(/\s+/g, ' '));
 
@@ -70,9 +56,9 @@ describe('launch conditions, answer first', () => {
   });
 
   it('300 m of OM3 with 2.0 dB at 850 nm carries 10GBASE-SR, and no request leaves the app', async () => {
-    const page = await newPage(browser, { viewport: PHONE });
-    const log = watchForeignRequests(page, new URL(server.url).origin);
-    await openScreen(page, server.url, 'link-applications');
+    const page = await newPage(shared.browser, { viewport: PHONE });
+    const log = watchForeignRequests(page, new URL(shared.server.url).origin);
+    await openScreen(page, shared.server.url, 'link-applications');
     await page.selectOption('#apps-loss', 'yes');
     await page.fill('#f-loss850', '2.0');
     await expect.poll(() => page.locator('main').innerText()).toMatch(/10GBASE-SR\s*✓ carried/);

@@ -13,40 +13,11 @@
 // library is protected; the backup file is chosen through a labelled button reachable from the keyboard.
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { closedAfterEach, waitForScreen } from './harness';
+import { closedAfterEach, storedRecords, waitForScreen, type StoredRecord } from './harness';
 import { DB_NAME } from '../../src/fibers/db';
 import { BACKUP_FORMAT_ID, BACKUP_FORMAT_VERSION } from '../../src/fibers/backup';
 
 const { serve, profile } = closedAfterEach();
-
-type StoredRecord = Record<string, unknown> & { id: string; name: string; updatedAt: number };
-
-/** Every saved fiber type, read straight from IndexedDB in the page (no app code), sorted by id. */
-async function storedRecords(page: Page): Promise<StoredRecord[]> {
-  const records = await page.evaluate(
-    (dbName) =>
-      new Promise<Record<string, unknown>[]>((resolve, reject) => {
-        const req = indexedDB.open(dbName);
-        req.onerror = () => reject(req.error);
-        req.onsuccess = () => {
-          const db = req.result;
-          if (!db.objectStoreNames.contains('fiberTypes')) {
-            db.close();
-            resolve([]);
-            return;
-          }
-          const all = db.transaction('fiberTypes').objectStore('fiberTypes').getAll();
-          all.onsuccess = () => {
-            db.close();
-            resolve(all.result as Record<string, unknown>[]);
-          };
-          all.onerror = () => reject(all.error);
-        };
-      }),
-    DB_NAME,
-  );
-  return (records as StoredRecord[]).sort((a, b) => (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
-}
 
 /** Writes records straight into IndexedDB (no app code), as a library saved earlier holds them. */
 async function plantRecords(page: Page, records: Record<string, unknown>[]): Promise<void> {

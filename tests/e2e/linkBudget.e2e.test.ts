@@ -2,27 +2,18 @@
 // an equipment power budget in dB instead of levels, one verdict per wavelength chosen, signed fields
 // that take every minus a phone can type, a bad row marked at its own field, one clean copied report,
 // and the budget on one printed page.
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { BUILDS, PHONE, launchBrowser, newContext, openScreen, startServer, type StaticServer } from './harness';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { newContext, openScreen, PHONE, sharedBrowser } from './harness';
 
-let browser: Browser;
-let server: StaticServer;
-beforeAll(async () => {
-  server = await startServer(BUILDS.current);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const shared = sharedBrowser();
 
 async function open(): Promise<Page> {
-  const context = await newContext(browser, { viewport: PHONE });
-  await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: server.origin });
+  const context = await newContext(shared.browser, { viewport: PHONE });
+  await context.grantPermissions(['clipboard-read', 'clipboard-write'], { origin: shared.server.origin });
   const page = await context.newPage();
   page.once('close', () => void context.close().catch(() => undefined));
-  await openScreen(page, server.url, 'link-budget');
+  await openScreen(page, shared.server.url, 'link-budget');
   return page;
 }
 

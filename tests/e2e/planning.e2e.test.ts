@@ -1,27 +1,12 @@
 // The planning calculators of issue 14 in real Chromium on the production build: a 1:32 PON at 20 km is judged
 // against a named loss class and the verdict is read from the headline <output>; the WDM plan names the channel of
 // a 1550.12 nm laser; both hand their result over as text and offer print.
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { BUILDS, PHONE, launchBrowser, newPage, openScreen, startServer, type StaticServer } from './harness';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { PHONE, sharedBrowser } from './harness';
 
-let browser: Browser;
-let server: StaticServer;
-beforeAll(async () => {
-  server = await startServer(BUILDS.current);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
-
-async function open(id: string): Promise<Page> {
-  const page = await newPage(browser, { viewport: PHONE });
-  await page.context().grantPermissions(['clipboard-read', 'clipboard-write'], { origin: server.url });
-  await openScreen(page, server.url, id);
-  return page;
-}
+const shared = sharedBrowser();
+const open = (id: string) => shared.open(id, { clipboard: true });
 
 async function headline(page: Page): Promise<string> {
   return (await page.locator('output.headline').innerText()).replace(/\s+/g, ' ');

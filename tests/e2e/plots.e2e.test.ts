@@ -3,9 +3,9 @@
 // label or tick) on a 320 px phone, a 360 px phone and a 1280 px laptop. SVG text scales with the
 // viewBox, so the size read is the CSS font size × the drawing's scale on screen.
 // 12 CSS px: the smallest text size the issue allows for plots (issue 11, "Plots readable").
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { BUILDS, LAPTOP, PHONE, launchBrowser, newContext, startServer, waitForScreen, type StaticServer, type Viewport } from './harness';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { LAPTOP, newContext, PHONE, sharedBrowser, waitForScreen, type Viewport } from './harness';
 import { FEATURES } from '../../src/features/registry';
 
 const MIN_TEXT_PX = 12;
@@ -17,16 +17,7 @@ const WIDTHS: { label: string; viewport: Viewport; checkSize: boolean }[] = [
   { label: '1280 px laptop', viewport: LAPTOP, checkSize: false },
 ];
 
-let browser: Browser;
-let server: StaticServer;
-beforeAll(async () => {
-  server = await startServer(BUILDS.current);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const shared = sharedBrowser();
 
 interface PlotText {
   plot: string;
@@ -70,14 +61,14 @@ async function plotTexts(page: Page): Promise<{ plots: number; texts: PlotText[]
 describe('plot text on every screen with a plot', () => {
   for (const { label, viewport, checkSize } of WIDTHS) {
     it(`${label}: ${checkSize ? `text ≥ ${MIN_TEXT_PX} px and ` : ''}every text inside its drawing`, async () => {
-      const context = await newContext(browser, { viewport });
+      const context = await newContext(shared.browser, { viewport });
       const page = await context.newPage();
       let screensWithPlots = 0;
       const small: string[] = [];
       const clipped: string[] = [];
       try {
         for (const f of FEATURES) {
-          await page.goto(`${server.url}#/${f.id}`);
+          await page.goto(`${shared.server.url}#/${f.id}`);
           await waitForScreen(page);
           await page.waitForFunction(() => !document.querySelector('[aria-busy="true"]'), undefined, { timeout: 20_000 });
           // Plots size themselves to their figure after layout: two frames.

@@ -1,25 +1,11 @@
 // Reading the line (issue 15) in real Chromium on the production build: the bend-or-splice verdict read from the
 // headline <output>, and the other three calculators answering first with their worked defaults.
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { BUILDS, PHONE, launchBrowser, newPage, openScreen, startServer, type StaticServer } from './harness';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { PHONE, sharedBrowser } from './harness';
 
-let browser: Browser;
-let server: StaticServer;
-beforeAll(async () => {
-  server = await startServer(BUILDS.current);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
-
-async function open(id: string): Promise<Page> {
-  const page = await newPage(browser, { viewport: PHONE });
-  await openScreen(page, server.url, id);
-  return page;
-}
+const shared = sharedBrowser();
+const open = (id: string) => shared.open(id);
 
 /** The headline answer as one line of text, once the worker has settled. */
 async function headline(page: Page): Promise<string> {

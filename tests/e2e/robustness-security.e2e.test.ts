@@ -2,28 +2,19 @@
 // rendered as text. Script-like names are typed,
 // imported from a backup, and planted straight into IndexedDB (as a tampered or foreign store would hold them);
 // each time the text is shown literally, no element is created from it, and window.__pwned stays undefined.
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { BUILDS, PHONE, launchBrowser, newContext, startServer, waitForScreen, watchCspViolations, type CspLog, type StaticServer } from './harness';
+import { describe, expect, it } from 'vitest';
+import type { BrowserContext, Page } from 'playwright-core';
+import { newContext, PHONE, sharedBrowser, waitForScreen, watchCspViolations, type CspLog } from './harness';
 import { BACKUP_FORMAT_ID, BACKUP_FORMAT_VERSION } from '../../src/fibers/backup';
 import { DB_NAME } from '../../src/fibers/db';
 
 const IMG = '<img src=x onerror="window.__pwned=1">';
 const SCRIPT = '<script>window.__pwned=1</script>';
 
-let browser: Browser;
-let server: StaticServer;
-beforeAll(async () => {
-  server = await startServer(BUILDS.current);
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.close();
-});
+const shared = sharedBrowser();
 
 async function freshPage(): Promise<{ context: BrowserContext; page: Page; errors: string[]; csp: CspLog }> {
-  const context = await newContext(browser, { viewport: PHONE });
+  const context = await newContext(shared.browser, { viewport: PHONE });
   const csp = await watchCspViolations(context);
   const page = await context.newPage();
   const errors: string[] = [];
@@ -41,7 +32,7 @@ async function pwned(page: Page): Promise<{ pwned: boolean; inline: boolean; liv
 }
 
 async function openLibrary(page: Page): Promise<void> {
-  await page.goto(`${server.url}#/library`);
+  await page.goto(`${shared.server.url}#/library`);
   await waitForScreen(page);
   await page.locator('#lib-saved').waitFor();
 }
