@@ -208,8 +208,11 @@ function solveInBracket(l: number, m: number, v: number, cutoffV: number, upper:
 /**
  * An LP mode's name: LP01, LP11 — and with a comma once an index has two digits, LP10,1 or
  * LP1,10, so LP101 is never ambiguous (common practice in mode tables, as in LP_{10,1}).
+ * Throws InputError for an index that is not a whole number (l ≥ 0, m ≥ 1).
  */
 export function lpName(l: number, m: number): string {
+  requireInteger('l', l, 0, Number.MAX_SAFE_INTEGER);
+  requireInteger('m', m, 1, Number.MAX_SAFE_INTEGER);
   return l >= 10 || m >= 10 ? `LP${l},${m}` : `LP${l}${m}`;
 }
 

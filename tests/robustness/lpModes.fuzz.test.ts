@@ -30,6 +30,11 @@ describe('lpModes: every V gives guided modes with 0 < b < 1 or a typed error', 
   fuzz(M, 'lpVectorModes', physics.lpVectorModes, fc.tuple(int(0, 50), int(1, 20)), (r) => {
     if (!Array.isArray(r) || r.length === 0 || r.some((s) => typeof s !== 'string' || s === '')) throw new Error(`families ${JSON.stringify(r)}`);
   });
+  fuzz(M, 'lpName', physics.lpName, fc.tuple(int(0, 40), int(1, 40)), (r, [ll, mm]) => {
+    // A technician reads both indices back from the name, one way only: LPl,m, or LPlm with one digit each.
+    const read = /^LP(\d+),(\d+)$/.exec(r) ?? /^LP(\d)(\d)$/.exec(r);
+    if (!read || Number(read[1]) !== ll || Number(read[2]) !== mm) throw new Error(`LP name ${r} does not read back as l = ${ll}, m = ${mm}`);
+  });
   fuzz(M, 'lpCutoffV', physics.lpCutoffV, fc.tuple(l, m), (r, [ll, mm]) => {
     if (ll === 0 && mm === 1 ? r !== 0 : !(r > 0)) throw new Error(`cutoff ${r}`);
   });
