@@ -62,7 +62,7 @@ export interface ContextOptions {
   /**
    * newContext blocks the service worker unless asked: a context made for one check would otherwise
    * install it and fetch the whole precache in the background, taking the CPU from the check on a
-   * two-core machine. The offline and update tests ask for it (and freshProfile always has it).
+   * two-core machine. The offline and update tests ask for it; freshProfile allows it unless told otherwise.
    */
   serviceWorkers?: 'allow' | 'block';
 }
