@@ -5,6 +5,7 @@
 //   3. the details (tables, plots, prose), "how this is computed" folded, and the report actions.
 // Screens fill the bands; they never lay them out themselves.
 import type { ComponentChildren } from 'preact';
+import { useEffect, useState } from 'preact/hooks';
 import { HowComputed, type HowComputedProps } from './HowComputed';
 import { ReportActions } from './ReportActions';
 import { CautionLine } from './SafetyNotice';
@@ -55,7 +56,19 @@ export interface CalcScreenProps {
   powerCaution?: boolean;
 }
 
+/**
+ * False in a screen's first render, true once the browser has painted it (Preact runs effects after the
+ * paint). The details wait for it: on a slow phone the headline shows first, and tables, plots and
+ * mode pictures follow a frame later instead of holding the answer back.
+ */
+function usePainted(): boolean {
+  const [painted, setPainted] = useState(false);
+  useEffect(() => setPainted(true), []);
+  return painted;
+}
+
 export function CalcScreen({ headline, status, inputs, inputsTitle = 'Inputs', children, how, report, powerCaution }: CalcScreenProps) {
+  const painted = usePainted();
   return (
     <div class="calc">
       <HeadlineBar headline={headline} status={status} />
@@ -64,7 +77,11 @@ export function CalcScreen({ headline, status, inputs, inputsTitle = 'Inputs', c
         <h2 id="calc-inputs-title">{inputsTitle}</h2>
         {inputs}
       </section>
-      {children && <div class="calc-details">{children}</div>}
+      {children && (
+        <div class="calc-details" aria-busy={painted ? undefined : 'true'}>
+          {painted && children}
+        </div>
+      )}
       {how && <HowComputed {...how} />}
       {report && !status.stale && <ReportActions report={report} />}
     </div>

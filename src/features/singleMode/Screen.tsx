@@ -34,11 +34,6 @@ export default function Screen() {
   }, [fiber, picker.error, wavelength.text]);
   const r = state.result;
 
-  const vMax = r ? Math.max(6, Math.min(r.v * 1.3, 12)) : 6;
-  const diagram = useResult(
-    () => DIAGRAM_FAMILIES.map(([l, m]) => ({ name: lpName(l, m), points: lpBvCurve(l, m, vMax, 80) })).filter((s) => s.points.length > 1),
-    [vMax],
-  );
 
   const shown: LPMode | undefined = r && (r.modes.find((m) => name(m) === chosen) ?? r.modes.find((m) => m.l === 1 && m.m === 1) ?? r.modes[0]);
   const labelCutoff = fiber?.cutoffWavelengthNm;
@@ -159,27 +154,7 @@ export default function Screen() {
         )}
       </ResultCard>
 
-      <ResultCard title="Where this fiber sits: the b–V diagram" stale={state.stale || diagram.stale} error={diagram.error}>
-        {r && diagram.result && (
-          <>
-            <LinePlot
-              title="Normalized propagation constant b of the first LP modes against V"
-              xLabel="V-number"
-              yLabel="b"
-              xRange={[0, vMax]}
-              yRange={[0, 1]}
-              series={diagram.result}
-              markers={[
-                { x: r.v, label: `this fiber: V = ${formatNumber(r.v, 3)}` },
-                { x: LP11_CUTOFF_V, label: 'LP11 cutoff 2.405' },
-                { x: lpCutoffV(2, 1), label: 'LP21, LP02 cutoff 3.832' },
-              ]}
-              points={r.modes.filter((m) => DIAGRAM_FAMILIES.some(([l, mm]) => l === m.l && mm === m.m)).map((m) => ({ x: r.v, y: m.b, label: name(m) }))}
-            />
-            <ShortProse text="Each curve starts at its cutoff (b = 0) and rises toward 1 as V grows. A mode is guided when its curve starts left of the V marker." />
-          </>
-        )}
-      </ResultCard>
+      <BvDiagram r={r} stale={state.stale} />
 
       <ResultCard title="What a mode looks like across the core" stale={state.stale}>
         {r && shown && (
@@ -200,5 +175,40 @@ export default function Screen() {
       </ResultCard>
 
     </CalcScreen>
+  );
+}
+
+/**
+ * The b–V diagram with this fiber's V marked. Its curves are computed here, when the card is drawn (after
+ * the headline's first paint, see CalcScreen), not in the screen's own render.
+ */
+function BvDiagram({ r, stale }: { r: (ReturnType<typeof singleModeCheck> & { wavelengthNm: number }) | undefined; stale: boolean }) {
+  const vMax = r ? Math.max(6, Math.min(r.v * 1.3, 12)) : 6;
+  const diagram = useResult(
+    () => DIAGRAM_FAMILIES.map(([l, m]) => ({ name: lpName(l, m), points: lpBvCurve(l, m, vMax, 80) })).filter((s) => s.points.length > 1),
+    [vMax],
+  );
+  return (
+    <ResultCard title="Where this fiber sits: the b–V diagram" stale={stale || diagram.stale} error={diagram.error}>
+      {r && diagram.result && (
+        <>
+          <LinePlot
+            title="Normalized propagation constant b of the first LP modes against V"
+            xLabel="V-number"
+            yLabel="b"
+            xRange={[0, vMax]}
+            yRange={[0, 1]}
+            series={diagram.result}
+            markers={[
+              { x: r.v, label: `this fiber: V = ${formatNumber(r.v, 3)}` },
+              { x: LP11_CUTOFF_V, label: 'LP11 cutoff 2.405' },
+              { x: lpCutoffV(2, 1), label: 'LP21, LP02 cutoff 3.832' },
+            ]}
+            points={r.modes.filter((m) => DIAGRAM_FAMILIES.some(([l, mm]) => l === m.l && mm === m.m)).map((m) => ({ x: r.v, y: m.b, label: name(m) }))}
+          />
+          <ShortProse text="Each curve starts at its cutoff (b = 0) and rises toward 1 as V grows. A mode is guided when its curve starts left of the V marker." />
+        </>
+      )}
+    </ResultCard>
   );
 }
