@@ -88,15 +88,16 @@ function measurePrecache(): void {
   sizeRow('precache as stored', raw, PRECACHE_GOAL_KB, ` [${urls.length} files, ${kb(zipped)} gz]`);
 }
 
-// Records, in the page's own clock (0 = navigation start), when the routed calculator
-// first shows a result (or, for a screen without a result card, its content).
+// Records, in the page's own clock (0 = navigation start), when the routed calculator first shows its
+// answer: the headline <output>, or a result card on a screen without one (or else its content).
 function firstCalculatorProbe(): void {
   const mark = () => {
     const w = window as unknown as { __firstResultMs?: number; __firstScreenMs?: number };
     const main = document.querySelector('main');
     if (!main || main.querySelector('.loading')) return;
     if (w.__firstScreenMs === undefined && main.querySelector('h1') && main.children.length > 1) w.__firstScreenMs = performance.now();
-    if (w.__firstResultMs === undefined && main.querySelector('.result-card .result-body')) w.__firstResultMs = performance.now();
+    // The answer: the headline <output> of the calculator frame (issue 11), or a result card where a screen has no headline.
+    if (w.__firstResultMs === undefined && main.querySelector('output .answer-line, .result-card .result-body')) w.__firstResultMs = performance.now();
   };
   new MutationObserver(mark).observe(document, { childList: true, subtree: true });
 }
