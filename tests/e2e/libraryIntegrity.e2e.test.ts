@@ -491,7 +491,11 @@ describe('choosing a backup file', () => {
     await input.focus();
     // The focus shows on the button a person sees.
     expect(await button.evaluate((el) => getComputedStyle(el).outlineStyle !== 'none' || getComputedStyle(el).boxShadow !== 'none')).toBe(true);
-    const [chooser] = await Promise.all([page.waitForEvent('filechooser'), page.keyboard.press('Space')]);
-    expect(chooser.isMultiple()).toBe(false);
+    // Waiting for the chooser makes Playwright ask the browser to intercept it; a round trip to the page
+    // after that request makes sure it is in place before the key is pressed, else the key can win the race.
+    const chooserShown = page.waitForEvent('filechooser');
+    await page.evaluate(() => undefined);
+    await page.keyboard.press('Space');
+    expect((await chooserShown).isMultiple()).toBe(false);
   });
 });
