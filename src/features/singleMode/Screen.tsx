@@ -11,7 +11,7 @@ import { LinePlot } from '../../ui/Plot';
 import { formatNumber, formatQuantity, lpName, withUnit } from '../../ui/format';
 import type { ReportSpec } from '../../ui/copyText';
 import { useFiberPicker } from '../../ui/FiberPicker';
-import { InputError, LP11_CUTOFF_V, lpBvCurve, lpCutoffV, singleModeCheck, type LPMode } from '../../physics';
+import { InputError, LP11_CUTOFF_V, lpBvCurve, lpCutoffV, singleModeCheck, type LPMode, type SingleModeCheck } from '../../physics';
 import { ModePicture } from './ModePicture';
 
 /** LP families drawn on the b–V diagram: the first five to appear as V grows (one line style each). */
@@ -182,7 +182,7 @@ export default function Screen() {
  * The b–V diagram with this fiber's V marked. Its curves are computed here, when the card is drawn (after
  * the headline's first paint, see CalcScreen), not in the screen's own render.
  */
-function BvDiagram({ r, stale }: { r: (ReturnType<typeof singleModeCheck> & { wavelengthNm: number }) | undefined; stale: boolean }) {
+function BvDiagram({ r, stale }: { r: SingleModeCheck | undefined; stale: boolean }) {
   const vMax = r ? Math.max(6, Math.min(r.v * 1.3, 12)) : 6;
   const diagram = useResult(
     () => DIAGRAM_FAMILIES.map(([l, m]) => ({ name: lpName(l, m), points: lpBvCurve(l, m, vMax, 80) })).filter((s) => s.points.length > 1),
