@@ -14,17 +14,25 @@ function startWorker(): Worker {
 }
 
 /**
+ * How long a typed value must rest before a worker task starts. A number typed key by key
+ * (1, 13, 131, 1310) is then computed once, not once per key. Each computation also ends the worker
+ * still busy with the older input and starts a fresh one: on a phone with few cores, that worker
+ * start-up and the solve took the CPU from the page, and the field lagged behind the thumb (typing
+ * into offset launch at CPU ÷4: longest main-thread task 190 ms computing per key, under 50 ms with
+ * this pause).
+ */
+export const TYPING_PAUSE_MS = 250;
+
+/**
  * Runs the named task of src/features/tasks.ts in a Web Worker whenever `input` changes
  * (compared by its JSON form). The latest input wins: a job still running for older
  * input is cancelled by ending that worker, since a synchronous solve cannot be interrupted.
  * `inputError` (a field that does not parse) skips the run and marks the result stale.
  *
- * `settleMs` (for heavy tasks): the job starts only once the input has stayed the same that long,
- * so a number being typed key by key is computed once, not once per key (each computation would
- * also take CPU from the page on a phone with few cores). The state says busy from the first key,
- * exactly as while a job runs.
+ * The job starts once the input has stayed the same for `settleMs` (TYPING_PAUSE_MS unless told;
+ * 0 starts at once). The state says busy from the first key, exactly as while a job runs.
  */
-export function useComputed<I, R>(task: string, input: I | undefined, inputError?: string, settleMs = 0): ComputedState<R> {
+export function useComputed<I, R>(task: string, input: I | undefined, inputError?: string, settleMs = TYPING_PAUSE_MS): ComputedState<R> {
   const [state, setState] = useState<ComputedState<R>>({ result: undefined, error: undefined, errorArgument: undefined, stale: false, busy: false });
   const worker = useRef<Worker | undefined>(undefined);
   const running = useRef(0);

@@ -20,11 +20,6 @@ type Fill = 'uniform' | 'restricted';
 const RESTRICTED_GROUP_FRACTION = 0.3;
 const SHARE_PERCENT = withUnit(String(POWER_SHARE_FOR_MODE_COUNT * 100), '%');
 const formatBar = (v: number) => formatNumber(v, 2);
-/**
- * The mode solve and overlaps take tens of milliseconds (hundreds on a phone): computed once the
- * typed value has rested this long, not for every key (1, 13, 131, 1310 would be four solves).
- */
-const SETTLE_MS = 250;
 
 function ResultLines({ r, what }: { r: LaunchSide; what: string }) {
   return (
@@ -105,7 +100,7 @@ export default function Screen() {
           distribution,
         }
       : undefined;
-  const res = useComputed<LaunchInput, LaunchOutput>('launch.couple', input, wavelength.error ?? offset.error ?? pickSm.error ?? pickMm.error, SETTLE_MS);
+  const res = useComputed<LaunchInput, LaunchOutput>('launch.couple', input, wavelength.error ?? offset.error ?? pickSm.error ?? pickMm.error);
   const r = res.result;
   const fieldArgs = [wavelength.argument, offset.argument];
   const fillWords = fill === 'uniform' ? 'power spread evenly over all multimode modes' : `only the lowest ${RESTRICTED_GROUP_FRACTION * 100}\u00a0% of the mode groups lit`;
