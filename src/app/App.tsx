@@ -1,4 +1,4 @@
-import { lazy, Suspense } from 'preact/compat';
+import type { ComponentType } from 'preact';
 import { useEffect, useMemo, useRef, useState } from 'preact/hooks';
 import { FEATURES, findFeature, GROUP_ORDER, GROUP_TITLES, type FeatureEntry } from '../features/registry';
 import { hrefFor, useRoute } from './route';
@@ -8,12 +8,44 @@ import { APP_BUILD, APP_VERSION } from './version';
 import { UpdatePrompt } from '../pwa/UpdatePrompt';
 import { matchesFilter, readRecent, rememberUse } from './recent';
 
-const screens = new Map(FEATURES.map((f) => [f.id, lazy(f.load)]));
+/** Screens already loaded, by feature id: coming back to a screen draws it at once. */
+const loadedScreens = new Map<string, ComponentType>();
+
+type ScreenLoad = { state: 'ready'; Screen: ComponentType } | { state: 'loading' } | { state: 'failed' };
+
+/**
+ * The feature's screen, loaded on first use (each screen is its own chunk). Written here rather than
+ * taken from preact/compat's lazy and Suspense: importing compat installs hooks that rewrite the props of
+ * every element Preact renders, on every render, which cost a phone a fifth of each key's work.
+ */
+function useScreen(feature: FeatureEntry | undefined): ScreenLoad | undefined {
+  const [, setVersion] = useState(0);
+  const [failed, setFailed] = useState<string | undefined>(undefined);
+  const id = feature?.id;
+  useEffect(() => {
+    if (!feature || loadedScreens.has(feature.id)) return;
+    let current = true;
+    feature.load().then(
+      (m) => {
+        loadedScreens.set(feature.id, m.default);
+        if (current) setVersion((v) => v + 1);
+      },
+      () => current && setFailed(feature.id),
+    );
+    return () => {
+      current = false;
+    };
+  }, [id]);
+  if (!feature) return undefined;
+  const Screen = loadedScreens.get(feature.id);
+  if (Screen) return { state: 'ready', Screen };
+  return failed === feature.id ? { state: 'failed' } : { state: 'loading' };
+}
 
 export function App() {
   const route = useRoute();
   const feature = findFeature(route);
-  const Screen = feature ? screens.get(feature.id) : undefined;
+  const screen = useScreen(feature);
   const main = useRef<HTMLElement>(null);
   useEffect(() => {
     document.title = feature ? `${feature.title} — Modewright` : 'Modewright — fiber field calculator';
@@ -31,11 +63,15 @@ export function App() {
       </header>
       <SafetyReminder />
       <main id="main" ref={main} tabIndex={-1} class="main">
-        {Screen ? (
-          <Suspense fallback={<p class="loading">Loading…</p>}>
+        {screen?.state === 'ready' ? (
+          <>
             <h1 class="screen-title">{feature!.title}</h1>
-            <Screen />
-          </Suspense>
+            <screen.Screen />
+          </>
+        ) : screen?.state === 'loading' ? (
+          <p class="loading">Loading…</p>
+        ) : screen?.state === 'failed' ? (
+          <p role="alert">This screen could not be loaded. Connect once and reload the page; after that it works offline.</p>
         ) : (
           <Home unknown={route !== '' && !feature ? route : undefined} />
         )}
