@@ -57,18 +57,55 @@ export interface CalcScreenProps {
 }
 
 /**
- * False in a screen's first render, true once the browser has painted it (Preact runs effects after the
- * paint). The details wait for it: on a slow phone the headline shows first, and tables, plots and
- * mode pictures follow a frame later instead of holding the answer back.
+ * The details band, brought up to date one card at a time, each in its own task after a frame.
+ *
+ * A key typed in a field re-renders the screen. Drawing every table and plot below the inputs in that
+ * same task, and laying them out in the frame after, took 50–180 ms on a slow phone: the field lagged
+ * behind the thumb. So the band keeps showing what it showed, and catches up card by card once the
+ * headline and the field have painted: each card's drawing and its layout fit in a short task, and a
+ * newer key starts the catching-up again from the first card that differs. The first load works the
+ * same way, so the headline paints before any detail.
+ *
+ * A card shown again unchanged is the same vnode as before, which Preact skips without rendering it.
+ * `aria-busy` stays on the band while it is behind, for screen readers and for every test that waits
+ * for a settled screen.
  */
-function usePainted(): boolean {
-  const [painted, setPainted] = useState(false);
-  useEffect(() => setPainted(true), []);
-  return painted;
+function DetailsBand({ children }: { children: ComponentChildren }) {
+  // Slots by position: `{r && <Card/>}` keeps its place as false while there is no result.
+  const target: ComponentChildren[] = Array.isArray(children) ? children : [children];
+  const [shown, setShown] = useState<ComponentChildren[]>([]);
+  const behind = target.length !== shown.length || target.some((c, i) => c !== shown[i]);
+
+  useEffect(() => {
+    if (!behind) return;
+    let timer: ReturnType<typeof setTimeout> | undefined;
+    // After the next frame (the one that paints what has just changed), in a task of its own.
+    const frame = requestAnimationFrame(() => {
+      timer = setTimeout(() => setShown((now) => nextStep(now, target)), 0);
+    });
+    return () => {
+      cancelAnimationFrame(frame);
+      if (timer !== undefined) clearTimeout(timer);
+    };
+  });
+
+  return (
+    <div class="calc-details" aria-busy={behind ? 'true' : undefined}>
+      {shown}
+    </div>
+  );
+}
+
+/** `now` with its first slot that differs from `target` taken from `target`; cut to length once all match. */
+function nextStep(now: ComponentChildren[], target: ComponentChildren[]): ComponentChildren[] {
+  const i = target.findIndex((c, k) => c !== now[k]);
+  if (i < 0) return now.length === target.length ? now : now.slice(0, target.length);
+  const next = now.slice();
+  next[i] = target[i];
+  return next;
 }
 
 export function CalcScreen({ headline, status, inputs, inputsTitle = 'Inputs', children, how, report, powerCaution }: CalcScreenProps) {
-  const painted = usePainted();
   return (
     <div class="calc">
       <HeadlineBar headline={headline} status={status} />
@@ -77,11 +114,7 @@ export function CalcScreen({ headline, status, inputs, inputsTitle = 'Inputs', c
         <h2 id="calc-inputs-title">{inputsTitle}</h2>
         {inputs}
       </section>
-      {children && (
-        <div class="calc-details" aria-busy={painted ? undefined : 'true'}>
-          {painted && children}
-        </div>
-      )}
+      {children && <DetailsBand>{children}</DetailsBand>}
       {how && <HowComputed {...how} />}
       {report && !status.stale && <ReportActions report={report} />}
     </div>
