@@ -8,6 +8,7 @@ import type { ComponentChildren } from 'preact';
 import { useEffect, useState } from 'preact/hooks';
 import { HowComputed, type HowComputedProps } from './HowComputed';
 import { ReportActions } from './ReportActions';
+import { rendersAlike } from './rendersAlike';
 import { CautionLine } from './SafetyNotice';
 import type { ReportSpec } from './copyText';
 
@@ -66,7 +67,9 @@ export interface CalcScreenProps {
  * newer key starts the catching-up again from the first card that differs. The first load works the
  * same way, so the headline paints before any detail.
  *
- * A card shown again unchanged is the same vnode as before, which Preact skips without rendering it.
+ * A card the screen made anew from unchanged data (every key re-renders the screen; a worker's result
+ * changes only when typing pauses) is left as it is: `rendersAlike` compares it with what is shown, and
+ * the old vnode, kept, is skipped by Preact without rendering it.
  * `aria-busy` stays on the band while it is behind, for screen readers and for every test that waits
  * for a settled screen.
  */
@@ -74,7 +77,7 @@ function DetailsBand({ children }: { children: ComponentChildren }) {
   // Slots by position: `{r && <Card/>}` keeps its place as false while there is no result.
   const target: ComponentChildren[] = Array.isArray(children) ? children : [children];
   const [shown, setShown] = useState<ComponentChildren[]>([]);
-  const behind = target.length !== shown.length || target.some((c, i) => c !== shown[i]);
+  const behind = target.length !== shown.length || target.some((c, i) => !rendersAlike(c, shown[i]));
 
   useEffect(() => {
     if (!behind) return;
@@ -96,9 +99,12 @@ function DetailsBand({ children }: { children: ComponentChildren }) {
   );
 }
 
-/** `now` with its first slot that differs from `target` taken from `target`; cut to length once all match. */
+/**
+ * `now` with its first slot that draws differently from `target` taken from `target`; cut to length once all
+ * match. A slot the screen made anew from the same data keeps its old vnode, which Preact skips.
+ */
 function nextStep(now: ComponentChildren[], target: ComponentChildren[]): ComponentChildren[] {
-  const i = target.findIndex((c, k) => c !== now[k]);
+  const i = target.findIndex((c, k) => !rendersAlike(c, now[k]));
   if (i < 0) return now.length === target.length ? now : now.slice(0, target.length);
   const next = now.slice();
   next[i] = target[i];

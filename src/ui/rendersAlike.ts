@@ -1,0 +1,41 @@
+// Whether two pieces of JSX draw the same thing, without drawing them: the details band (CalcScreen)
+// uses it to leave a card alone when a re-render of the screen made it anew from the same data.
+
+/** Deeper than any card's props; a structure this deep is treated as changed, never walked further. */
+const MAX_DEPTH = 200;
+
+/** A Preact vnode: made by JSX, marked by an own `constructor` that is undefined. */
+function isVNode(x: object): x is { type: unknown; key: unknown; ref: unknown; props: unknown } {
+  return 'type' in x && 'props' in x && Object.prototype.hasOwnProperty.call(x, 'constructor') && (x as { constructor: unknown }).constructor === undefined;
+}
+
+/**
+ * True when `a` and `b` render alike: the same vnode, or vnodes of the same type, key and ref whose props
+ * are equal in depth (numbers by `Object.is`, so NaN equals NaN; arrays, typed arrays and plain objects by
+ * their entries). Functions, maps, class instances and anything else count as alike only when they are the
+ * very same object: a handler made anew may hold new state, so it is never assumed equal. A false answer
+ * only costs a re-render; a true one must never hide a change.
+ */
+export function rendersAlike(a: unknown, b: unknown, depth = 0): boolean {
+  if (Object.is(a, b)) return true;
+  if (typeof a !== 'object' || typeof b !== 'object' || a === null || b === null || depth > MAX_DEPTH) return false;
+  if (Array.isArray(a) || Array.isArray(b) || ArrayBuffer.isView(a) || ArrayBuffer.isView(b)) {
+    const x = a as ArrayLike<unknown>;
+    const y = b as ArrayLike<unknown>;
+    if (Object.getPrototypeOf(a) !== Object.getPrototypeOf(b) || x.length !== y.length) return false;
+    for (let i = 0; i < x.length; i++) if (!rendersAlike(x[i], y[i], depth + 1)) return false;
+    return true;
+  }
+  if (isVNode(a) || isVNode(b)) {
+    if (!isVNode(a) || !isVNode(b)) return false;
+    return a.type === b.type && a.key === b.key && a.ref === b.ref && rendersAlike(a.props, b.props, depth + 1);
+  }
+  const proto = Object.getPrototypeOf(a);
+  if (proto !== Object.getPrototypeOf(b) || (proto !== Object.prototype && proto !== null)) return false;
+  const keys = Object.keys(a);
+  if (keys.length !== Object.keys(b).length) return false;
+  for (const k of keys) {
+    if (!Object.prototype.hasOwnProperty.call(b, k) || !rendersAlike((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], depth + 1)) return false;
+  }
+  return true;
+}
