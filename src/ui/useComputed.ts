@@ -29,39 +29,53 @@ export const TYPING_PAUSE_MS = 250;
  * input is cancelled by ending that worker, since a synchronous solve cannot be interrupted.
  * `inputError` (a field that does not parse) skips the run and marks the result stale.
  *
- * The job starts once the input has stayed the same for `settleMs` (TYPING_PAUSE_MS unless told;
- * 0 starts at once). The state says busy from the first key, exactly as while a job runs.
+ * The first input is computed at once; a later one once it has stayed the same for `settleMs`
+ * (TYPING_PAUSE_MS unless told; 0 starts at once). The state says busy from the first key, exactly as
+ * while a job runs.
  */
 export function useComputed<I, R>(task: string, input: I | undefined, inputError?: string, settleMs = TYPING_PAUSE_MS): ComputedState<R> {
   const [state, setState] = useState<ComputedState<R>>({ result: undefined, error: undefined, errorArgument: undefined, stale: false, busy: false });
   const worker = useRef<Worker | undefined>(undefined);
   const running = useRef(0);
   const seq = useRef(0);
+  const posted = useRef(false);
   const key = input === undefined ? undefined : JSON.stringify(input);
 
   useEffect(() => () => worker.current?.terminate(), []);
 
   useEffect(() => {
     if (key === undefined || inputError) {
+      // Nothing to compute; a job still running for the earlier input must not land as if current.
+      ++seq.current;
+      cancelRunning();
       setState((s) => ({ ...s, error: inputError ?? s.error, errorArgument: undefined, fault: undefined, stale: s.result !== undefined, busy: false }));
       return;
     }
-    if (settleMs <= 0) {
+    // The first input is computed at once: nobody is typing yet, and the answer should show as soon as it can.
+    if (settleMs <= 0 || !posted.current) {
+      posted.current = true;
       post(key);
       return;
     }
     ++seq.current; // a reply still on its way belongs to older input
+    cancelRunning(); // and the job computing it is ended now, not at the next post: it would take a core from the typing
     setState((s) => (s.busy ? s : { ...s, busy: true }));
     const timer = setTimeout(() => post(key), settleMs);
     return () => clearTimeout(timer);
   }, [task, key, inputError, settleMs]);
 
-  function post(key: string): void {
-    const id = ++seq.current;
+  /** Ends the worker if it is still computing (a synchronous solve cannot be interrupted any other way). */
+  function cancelRunning(): void {
     if (running.current !== 0 && worker.current) {
       worker.current.terminate();
       worker.current = undefined;
     }
+    running.current = 0;
+  }
+
+  function post(key: string): void {
+    const id = ++seq.current;
+    cancelRunning();
     if (!worker.current) {
       try {
         worker.current = startWorker();
