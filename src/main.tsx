@@ -6,11 +6,15 @@ import { installKeepTogether } from './ui/keepTogether';
 
 installKeepTogether();
 
-// A state change is drawn in a task of its own, not at the end of the event that made it (Preact's
-// default, a microtask). A key typed in a field then costs the browser's own work and the field's echo;
-// the screen's new answer follows in the next task. On a slow phone the two together made one task too
-// long for the field to keep up with the thumb.
-options.debounceRendering = (flush) => setTimeout(flush, 0);
+// What a key typed in a field changes is drawn in a task of its own, not at the end of the input event
+// (Preact's default, a microtask). The key's own task is then the browser's echo of it, and the new
+// answer follows in the next task: on a slow phone the two together made one task too long for the
+// field to keep up with the thumb. Every other change (a tap, a choice, a result from the worker) is
+// drawn at once, as before.
+options.debounceRendering = (flush) => {
+  if (window.event?.type === 'input') setTimeout(flush, 0);
+  else void Promise.resolve().then(flush);
+};
 
 render(<App />, document.getElementById('app')!);
 registerServiceWorker();
