@@ -9,7 +9,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { copyFileSync, existsSync, mkdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { BUILDS, LAPTOP, PHONE, REPO_ROOT, launchBrowser, newContext, startServer, waitForScreen, type StaticServer, type Viewport } from './harness';
+import { BUILDS, LAPTOP, PHONE, REPO_ROOT, launchBrowser, newContext, settled, startServer, waitForScreen, type StaticServer, type Viewport } from './harness';
 import { FEATURES } from '../../src/features/registry';
 
 const CALCULATORS = FEATURES.filter((f) => f.id !== 'library').map((f) => ({ id: f.id, title: f.title }));
@@ -31,10 +31,7 @@ afterAll(async () => {
   await server?.close();
 });
 
-async function settle(page: Page): Promise<void> {
-  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(() => r(null)))));
-  await page.waitForFunction(() => !document.querySelector('[aria-busy="true"]'), undefined, { timeout: 20_000 });
-}
+const settle = (page: Page) => settled(page);
 
 async function open(viewport: Viewport, id: string, theme: (typeof THEMES)[number] = 'light'): Promise<{ context: BrowserContext; page: Page }> {
   const context = await newContext(browser, { viewport, colorScheme: theme });

@@ -3,7 +3,7 @@
 // text suggests a level is all right to look at or says a sentence twice; the dispersion screen draws D(λ).
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { sharedBrowser } from './harness';
+import { settled, sharedBrowser } from './harness';
 
 // Same list as tests/physics/laserSafety.test.ts: phrasing that would suggest a power is all right to look at.
 const FORBIDDEN = /safe to (look|view|stare|see)|eye[- ]?safe|harmless|no (eye )?hazard|safe for (the )?eyes?|\bis safe\b|\bare safe\b|safe level|safely (look|view)/i;
@@ -12,6 +12,7 @@ const shared = sharedBrowser();
 const open = (id: string) => shared.open(id);
 
 async function mainText(page: Page): Promise<string> {
+  await settled(page);
   return (await page.locator('main').innerText()).replace(/\s+/g, ' ');
 }
 

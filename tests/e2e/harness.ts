@@ -282,6 +282,35 @@ export async function waitForScreen(page: Page): Promise<void> {
   });
 }
 
+/**
+ * Waits until the screen has settled: the render a typed key queued has run (it runs in a task of its
+ * own, src/main.tsx), nothing says it is busy (the headline while the worker computes, the details band
+ * while it catches up card by card), and the screen's text is the same two frames running (a worker job
+ * marks itself busy only in an effect after a frame; a plot fits its width when a frame reports it).
+ * Read anything below the headline after this, not after the headline alone has changed.
+ */
+export async function settled(page: Page, timeoutMs = 20_000): Promise<void> {
+  const ok = await page.evaluate(async (limitMs) => {
+    const nextFrame = () => new Promise<void>((r) => requestAnimationFrame(() => setTimeout(r, 0)));
+    await new Promise((r) => setTimeout(r, 0)); // after any render already queued
+    const text = () => (document.querySelector('main') as HTMLElement | null)?.innerText ?? '';
+    let last: string | undefined;
+    const until = performance.now() + limitMs;
+    while (performance.now() < until) {
+      await nextFrame();
+      if (document.querySelector('[aria-busy="true"]')) {
+        last = undefined;
+        continue;
+      }
+      const now = text();
+      if (now === last) return true;
+      last = now;
+    }
+    return false;
+  }, timeoutMs);
+  if (!ok) throw new Error(`the screen did not settle within ${timeoutMs / 1000} s (still busy, or its text still changing)`);
+}
+
 /** The update prompt's words (src/pwa/UpdatePrompt.tsx), as the update tests look for them. */
 export const UPDATE_OFFER = 'A new version is ready — reload to update.';
 
@@ -368,6 +397,7 @@ export function sharedBrowser(): SharedBrowser {
       const page = await newPage(b, { viewport: PHONE, ...opts });
       if (clipboard) await page.context().grantPermissions(['clipboard-read', 'clipboard-write'], { origin: s.url });
       await openScreen(page, s.url, id);
+      await settled(page);
       return page;
     },
   };

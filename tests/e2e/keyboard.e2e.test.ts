@@ -3,7 +3,7 @@
 // and "1,55 µm" (decimal comma, micrometres) read as 1550 nm wherever a wavelength is typed.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, BrowserContext, Page } from 'playwright-core';
-import { BUILDS, PHONE, launchBrowser, newContext, startServer, waitForScreen, type StaticServer } from './harness';
+import { BUILDS, PHONE, launchBrowser, newContext, settled, startServer, waitForScreen, type StaticServer } from './harness';
 import { FEATURES } from '../../src/features/registry';
 
 let browser: Browser;
@@ -174,14 +174,12 @@ describe('typed units', () => {
         expect(fieldId, 'the screen has a wavelength field').toBeTruthy();
         const field = page.locator(`#${fieldId}`);
         const results = page.locator('main output, main .result-card');
-        const settled = () => page.waitForFunction(() => !document.querySelector('[aria-busy="true"]'), undefined, { timeout: 15_000 });
-
         await field.fill('1550');
-        await settled();
+        await settled(page);
         const at1550 = await results.allTextContents();
 
         await field.fill('1,55 µm');
-        await settled();
+        await settled(page);
         await expect.poll(() => page.locator(`#${fieldId}-conv`).textContent()).toMatch(/1550\s*nm/);
         expect(await page.locator(`#${fieldId}-err`).count(), 'no error under the field').toBe(0);
         expect(await field.getAttribute('aria-invalid')).toBeNull();

@@ -3,12 +3,15 @@
 // the worker (tests/physics/encircledFlux.test.ts checks the numbers themselves).
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { PHONE, newPage, openScreen, sharedBrowser, watchForeignRequests } from './harness';
+import { PHONE, newPage, openScreen, settled, sharedBrowser, watchForeignRequests } from './harness';
 
 const shared = sharedBrowser();
 const open = (id: string) => shared.open(id);
 
-const headline = (page: Page) => page.locator('output.headline').innerText().then((t) => t.replace(/\s+/g, ' '));
+async function headline(page: Page): Promise<string> {
+  await settled(page);
+  return (await page.locator('output.headline').innerText()).replace(/\s+/g, ' ');
+}
 
 /** The headline's box lies inside the first screenful (360 × 740). */
 async function headlineInView(page: Page): Promise<boolean> {

@@ -4,7 +4,7 @@
 // and the budget on one printed page.
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { newContext, openScreen, PHONE, sharedBrowser } from './harness';
+import { newContext, openScreen, PHONE, settled, sharedBrowser } from './harness';
 
 const shared = sharedBrowser();
 
@@ -19,10 +19,12 @@ async function open(): Promise<Page> {
 
 /** The headline <output>, with no-break spaces read as spaces. */
 async function headline(page: Page): Promise<string> {
+  await settled(page);
   return ((await page.locator('output.headline').innerText()) ?? '').replace(/\u00a0/g, ' ').replace(/\s+/g, ' ').trim();
 }
 
 async function verdictLines(page: Page): Promise<string[]> {
+  await settled(page);
   return (await page.locator('output.headline .answer-line').allInnerTexts()).map((t) => t.replace(/\u00a0/g, ' ').replace(/\s+/g, ' ').trim());
 }
 

@@ -3,12 +3,13 @@
 // a 1550.12 nm laser; both hand their result over as text and offer print.
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { PHONE, sharedBrowser } from './harness';
+import { PHONE, settled, sharedBrowser } from './harness';
 
 const shared = sharedBrowser();
 const open = (id: string) => shared.open(id, { clipboard: true });
 
 async function headline(page: Page): Promise<string> {
+  await settled(page);
   return (await page.locator('output.headline').innerText()).replace(/\s+/g, ' ');
 }
 

@@ -5,7 +5,7 @@
 // 12 CSS px: the smallest text size the issue allows for plots (issue 11, "Plots readable").
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { LAPTOP, newContext, PHONE, sharedBrowser, waitForScreen, type Viewport } from './harness';
+import { LAPTOP, newContext, PHONE, settled, sharedBrowser, waitForScreen, type Viewport } from './harness';
 import { FEATURES } from '../../src/features/registry';
 
 const MIN_TEXT_PX = 12;
@@ -70,9 +70,7 @@ describe('plot text on every screen with a plot', () => {
         for (const f of FEATURES) {
           await page.goto(`${shared.server.url}#/${f.id}`);
           await waitForScreen(page);
-          await page.waitForFunction(() => !document.querySelector('[aria-busy="true"]'), undefined, { timeout: 20_000 });
-          // Plots size themselves to their figure after layout: two frames.
-          await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+          await settled(page);
           const { plots, texts } = await plotTexts(page);
           if (plots > 0) screensWithPlots++;
           for (const t of texts) {

@@ -2,13 +2,14 @@
 // headline <output>, and the other three calculators answering first with their worked defaults.
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { PHONE, sharedBrowser } from './harness';
+import { PHONE, settled, sharedBrowser } from './harness';
 
 const shared = sharedBrowser();
 const open = (id: string) => shared.open(id);
 
 /** The headline answer as one line of text, once the worker has settled. */
 async function headline(page: Page): Promise<string> {
+  await settled(page);
   await page.waitForFunction(() => {
     const out = document.querySelector('output.headline');
     return !!out && out.getAttribute('aria-busy') !== 'true' && !/No answer yet|Working/.test(out.textContent ?? '');

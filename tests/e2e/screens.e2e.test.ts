@@ -6,7 +6,7 @@ import { mkdirSync, rmSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import { join } from 'node:path';
 import type { Browser, Page } from 'playwright-core';
-import { BUILDS, LAPTOP, PHONE, REPO_ROOT, launchBrowser, newContext, startServer, waitForScreen, type StaticServer, type Viewport } from './harness';
+import { BUILDS, LAPTOP, PHONE, REPO_ROOT, launchBrowser, newContext, settled, startServer, waitForScreen, type StaticServer, type Viewport } from './harness';
 import { FEATURES } from '../../src/features/registry';
 
 const AXE_PATH = createRequire(import.meta.url).resolve('axe-core/axe.min.js');
@@ -37,7 +37,7 @@ async function show(page: Page, id: string, title: string): Promise<void> {
   await page.goto(`${server.url}#/${id}`);
   await waitForScreen(page);
   expect(await page.locator('main h1').first().textContent()).toBe(title);
-  await page.waitForFunction(() => !document.querySelector('[aria-busy="true"]'), undefined, { timeout: 15_000 });
+  await settled(page);
 }
 
 async function setTheme(page: Page, theme: (typeof THEMES)[number]): Promise<void> {
