@@ -193,6 +193,9 @@ async function typeOnScreen(serverUrl: string, browser: Awaited<ReturnType<typeo
     await cdp.send('Emulation.setCPUThrottlingRate', { rate: slowdown });
     await page.goto(`${serverUrl}#/${screen}`);
     await page.waitForFunction(() => !!document.querySelector('main h1 ~ *') && !document.querySelector('main .loading'));
+    // Typing starts once the screen has its first answer and its details (nothing busy), as a person starts
+    // once they have read it; the first answer landing is the offline-start figure's business, not this one's.
+    await page.waitForFunction(() => !document.querySelector('[aria-busy="true"]'), undefined, { timeout: 60_000 });
     await page.waitForTimeout(500);
     const fields = page.locator('main input[data-number]:visible');
     const n = Math.min(await fields.count(), 4);
