@@ -2,6 +2,7 @@ import type { QuantityState } from './useQuantity';
 import type { FieldFault } from './useResult';
 import type { QuantityKind } from '../physics/units';
 import { sentence } from './errorText';
+import { memoAlike } from './rendersAlike';
 
 /** The wavelengths field equipment commonly runs at, offered as quick picks (common practice). */
 export const OPERATING_WAVELENGTHS_NM: readonly number[] = [850, 1300, 1310, 1490, 1550, 1625];
@@ -128,7 +129,7 @@ export function parseErrorText(q: QuantityState, label: string, unit: string, ex
 }
 
 /** A field bound to one useQuantity state; its id is `f-<argument>`. */
-export function NumberField({ q, calc, example, keypad, ...rest }: NumberFieldProps) {
+function NumberFieldView({ q, calc, example, keypad, ...rest }: NumberFieldProps) {
   const fault = calc?.errorArgument === q.argument ? calc.fault : undefined;
   const error = parseErrorText(q, rest.label, rest.unit, example) ?? (fault ? sentence(rest.label, fault.allowed, fault.hint) : undefined);
   return (
@@ -144,3 +145,6 @@ export function NumberField({ q, calc, example, keypad, ...rest }: NumberFieldPr
     />
   );
 }
+
+/** A typed quantity's field. Skipped when the screen re-renders with the same props (a key in another field). */
+export const NumberField = memoAlike(NumberFieldView);

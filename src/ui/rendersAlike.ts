@@ -1,5 +1,7 @@
 // Whether two pieces of JSX draw the same thing, without drawing them: the details band (CalcScreen)
-// uses it to leave a card alone when a re-render of the screen made it anew from the same data.
+// uses it to leave a card alone when a re-render of the screen made it anew from the same data, and
+// memoAlike to skip the fields a key did not touch.
+import { Component, h, type ComponentType, type FunctionComponent } from 'preact';
 
 /** Deeper than any card's props; a structure this deep is treated as changed, never walked further. */
 const MAX_DEPTH = 200;
@@ -38,4 +40,22 @@ export function rendersAlike(a: unknown, b: unknown, depth = 0): boolean {
     if (!Object.prototype.hasOwnProperty.call(b, k) || !rendersAlike((a as Record<string, unknown>)[k], (b as Record<string, unknown>)[k], depth + 1)) return false;
   }
   return true;
+}
+
+/**
+ * `component`, re-rendered by its parent only when its props no longer render alike (see above). For the
+ * fields of an inputs band: a key typed in one field re-renders the screen, and the other fields, given
+ * props equal to the last ones, are skipped. The component's own state still re-renders it as usual.
+ */
+export function memoAlike<P extends object>(component: FunctionComponent<P>): ComponentType<P> {
+  class Alike extends Component<P> {
+    override shouldComponentUpdate(next: P): boolean {
+      return !rendersAlike(this.props, next);
+    }
+    render(props: P) {
+      return h(component, props);
+    }
+  }
+  (Alike as unknown as { displayName: string }).displayName = `Alike(${component.displayName ?? component.name})`;
+  return Alike;
 }

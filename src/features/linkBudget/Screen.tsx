@@ -2,7 +2,7 @@
 // under a named rule set, and whether the link fits the equipment at each wavelength it uses. The
 // loss arithmetic is in src/physics/linkBudget.ts, the equipment check in src/physics/equipmentBudget.ts.
 import { useState } from 'preact/hooks';
-import { NumberField, NumberInput } from '../../ui/NumberField';
+import { NumberField, NumberInput, type NumberFieldProps } from '../../ui/NumberField';
 import { need, shownValue, useQuantity, type QuantityState } from '../../ui/useQuantity';
 import { cardError, useResult } from '../../ui/useResult';
 import { ResultCard } from '../../ui/ResultCard';
@@ -68,7 +68,7 @@ function count(q: QuantityState, max: number): number {
   return v;
 }
 
-function SpreadFields({ label, qs, calc, help }: { label: string; qs: [QuantityState, QuantityState, QuantityState]; calc: Parameters<typeof NumberField>[0]['calc']; help?: string }) {
+function SpreadFields({ label, qs, calc, help }: { label: string; qs: [QuantityState, QuantityState, QuantityState]; calc: NumberFieldProps['calc']; help?: string }) {
   return (
     <fieldset class="form">
       <legend>{label}</legend>
