@@ -5,7 +5,7 @@
 //   3. the details (tables, plots, prose), "how this is computed" folded, and the report actions.
 // Screens fill the bands; they never lay them out themselves.
 import type { ComponentChildren } from 'preact';
-import { useEffect, useState } from 'preact/hooks';
+import { useEffect, useLayoutEffect, useRef, useState } from 'preact/hooks';
 import { HowComputed, type HowComputedProps } from './HowComputed';
 import { ReportActions } from './ReportActions';
 import { rendersAlike } from './rendersAlike';
@@ -58,13 +58,14 @@ export interface CalcScreenProps {
 }
 
 /**
- * The details band, brought up to date one card at a time, each in its own task after a frame.
+ * The details band, brought up to date a card or a few at a time, each step in its own task after a frame.
  *
  * A key typed in a field re-renders the screen. Drawing every table and plot below the inputs in that
  * same task, and laying them out in the frame after, took 50–180 ms on a slow phone: the field lagged
  * behind the thumb. So the band keeps showing what it showed, and catches up card by card once the
- * headline and the field have painted: each card's drawing and its layout fit in a short task, and a
- * newer key starts the catching-up again from the first card that differs. The first load works the
+ * headline and the field have painted: each step's drawing and its layout fit in a short task (a step
+ * takes as many cards as the last step's cost says fit in STEP_BUDGET_MS), and a newer key starts the
+ * catching-up again from the first card that differs. The first load works the
  * same way, so the headline paints before any detail.
  *
  * A card the screen made anew from unchanged data (every key re-renders the screen; a worker's result
@@ -73,18 +74,42 @@ export interface CalcScreenProps {
  * `aria-busy` stays on the band while it is behind, for screen readers and for every test that waits
  * for a settled screen.
  */
+/**
+ * Drawing time (script) a step of the band aims at. A card that costs more goes alone; cheaper cards go
+ * together, so a fast phone (or a desktop) brings the whole band up in one or two steps, not one per card.
+ */
+const STEP_BUDGET_MS = 8;
+
 function DetailsBand({ children }: { children: ComponentChildren }) {
   // Slots by position: `{r && <Card/>}` keeps its place as false while there is no result.
   const target: ComponentChildren[] = Array.isArray(children) ? children : [children];
   const [shown, setShown] = useState<ComponentChildren[]>([]);
   const behind = target.length !== shown.length || target.some((c, i) => !rendersAlike(c, shown[i]));
+  // What a card cost to draw on the last step: from the step's start to its commit (layout effects run then).
+  const cost = useRef({ startedMs: 0, cards: 0, msPerCard: Infinity });
+
+  useLayoutEffect(() => {
+    const c = cost.current;
+    if (c.startedMs === 0) return;
+    c.msPerCard = (performance.now() - c.startedMs) / Math.max(1, c.cards);
+    c.startedMs = 0;
+  });
 
   useEffect(() => {
     if (!behind) return;
     let timer: ReturnType<typeof setTimeout> | undefined;
     // After the next frame (the one that paints what has just changed), in a task of its own.
     const frame = requestAnimationFrame(() => {
-      timer = setTimeout(() => setShown((now) => nextStep(now, target)), 0);
+      timer = setTimeout(() => {
+        const c = cost.current;
+        const cards = Math.max(1, Math.floor(STEP_BUDGET_MS / c.msPerCard));
+        c.startedMs = performance.now();
+        setShown((now) => {
+          const next = nextStep(now, target, cards);
+          c.cards = next.taken;
+          return next.shown;
+        });
+      }, 0);
     });
     return () => {
       cancelAnimationFrame(frame);
@@ -100,15 +125,19 @@ function DetailsBand({ children }: { children: ComponentChildren }) {
 }
 
 /**
- * `now` with its first slot that draws differently from `target` taken from `target`; cut to length once all
- * match. A slot the screen made anew from the same data keeps its old vnode, which Preact skips.
+ * `now` with up to `cards` of its slots that draw differently from `target` taken from `target`, in order;
+ * cut to length once all match. A slot the screen made anew from the same data keeps its old vnode, which
+ * Preact skips.
  */
-function nextStep(now: ComponentChildren[], target: ComponentChildren[]): ComponentChildren[] {
-  const i = target.findIndex((c, k) => !rendersAlike(c, now[k]));
-  if (i < 0) return now.length === target.length ? now : now.slice(0, target.length);
-  const next = now.slice();
-  next[i] = target[i];
-  return next;
+function nextStep(now: ComponentChildren[], target: ComponentChildren[], cards: number): { shown: ComponentChildren[]; taken: number } {
+  const next = now.slice(0, target.length);
+  let taken = 0;
+  for (let i = 0; i < target.length && taken < cards; i++) {
+    if (rendersAlike(target[i], now[i])) continue;
+    next[i] = target[i];
+    taken++;
+  }
+  return { shown: taken === 0 && next.length === now.length ? now : next, taken };
 }
 
 export function CalcScreen({ headline, status, inputs, inputsTitle = 'Inputs', children, how, report, powerCaution }: CalcScreenProps) {
