@@ -182,12 +182,29 @@ export default function Screen() {
  * The b–V diagram with this fiber's V marked. Its curves are computed here, when the card is drawn (after
  * the headline's first paint, see CalcScreen), not in the screen's own render.
  */
+/**
+ * The diagram's V range: 6, 9 or 12, the first that shows the fiber's V with a third to spare. A few fixed
+ * ranges, each computed once per visit (`bvCurves`), so typing a wavelength key by key (1, 13, 131 nm give
+ * huge V) does not solve the curves again on every key.
+ */
+function diagramVMax(v: number | undefined): number {
+  return [6, 9, 12].find((top) => v === undefined || 1.3 * v <= top) ?? 12;
+}
+
+const bvCurveCache = new Map<number, { name: string; points: [number, number][] }[]>();
+
+function bvCurves(vMax: number): { name: string; points: [number, number][] }[] {
+  let curves = bvCurveCache.get(vMax);
+  if (!curves) {
+    curves = DIAGRAM_FAMILIES.map(([l, m]) => ({ name: lpName(l, m), points: lpBvCurve(l, m, vMax, 80) })).filter((s) => s.points.length > 1);
+    bvCurveCache.set(vMax, curves);
+  }
+  return curves;
+}
+
 function BvDiagram({ r, stale }: { r: SingleModeCheck | undefined; stale: boolean }) {
-  const vMax = r ? Math.max(6, Math.min(r.v * 1.3, 12)) : 6;
-  const diagram = useResult(
-    () => DIAGRAM_FAMILIES.map(([l, m]) => ({ name: lpName(l, m), points: lpBvCurve(l, m, vMax, 80) })).filter((s) => s.points.length > 1),
-    [vMax],
-  );
+  const vMax = diagramVMax(r?.v);
+  const diagram = useResult(() => bvCurves(vMax), [vMax]);
   return (
     <ResultCard title="Where this fiber sits: the b–V diagram" stale={stale || diagram.stale} error={diagram.error}>
       {r && diagram.result && (
