@@ -65,8 +65,8 @@ export interface CalcScreenProps {
  * behind the thumb. So the band keeps showing what it showed, and catches up card by card once the
  * headline and the field have painted: each step's drawing and its layout fit in a short task (a step
  * takes as many cards as the last step's cost says fit in STEP_BUDGET_MS), and a newer key starts the
- * catching-up again from the first card that differs. The first load works the
- * same way, so the headline paints before any detail.
+ * catching-up again from the first card that differs. The first load works the same way, so the
+ * headline paints before any detail.
  *
  * A card the screen made anew from unchanged data (every key re-renders the screen; a worker's result
  * changes only when typing pauses) is left as it is: `rendersAlike` compares it with what is shown, and

@@ -70,16 +70,18 @@ interface FuzzProbe {
 
 /**
  * Put into every page before the app: the screen is read, and texts are typed, in the page itself, so
- * each hostile text costs two frames and no round trip to the test. A text is put in as the browser does
+ * each hostile text costs a few frames and no round trip to the test. A text is put in as the browser does
  * for a paste (the value set, then an "input" event), with the folded fiber choice opened first, as a
  * person taps it open to type.
  */
 function installFuzzProbe(): void {
   const nextFrame = () => new Promise<void>((r) => requestAnimationFrame(() => setTimeout(r, 0)));
   const settle = async (): Promise<boolean> => {
-    // Settled: not computing, and the screen's text the same two frames running. The render comes in a
-    // microtask after the event; a worker-backed result marks itself busy only in an effect after the next
-    // frame; and a plot fits itself to its figure's width when a frame's layout reports it.
+    // Settled: not computing, and the screen's text the same two frames running. The render of a typed text
+    // comes in a task after the event (src/main.tsx), hence the timer first; a worker-backed result marks
+    // itself busy only in an effect after the next frame; the details band catches up a step per frame; and a
+    // plot fits itself to its figure's width when a frame's layout reports it. The same wait, for a test
+    // outside the page, is settled() in harness.ts: this copy runs inside the page and cannot import it.
     await new Promise((r) => setTimeout(r, 0));
     const main = () => (document.querySelector('main') as HTMLElement | null)?.innerText ?? '';
     let last: string | undefined;

@@ -34,7 +34,6 @@ export default function Screen() {
   }, [fiber, picker.error, wavelength.text]);
   const r = state.result;
 
-
   const shown: LPMode | undefined = r && (r.modes.find((m) => name(m) === chosen) ?? r.modes.find((m) => m.l === 1 && m.m === 1) ?? r.modes[0]);
   const labelCutoff = fiber?.cutoffWavelengthNm;
   // The label's measured cutoff decides in practice: above it LP11 is stripped within metres,
@@ -179,8 +178,8 @@ export default function Screen() {
 }
 
 /**
- * The b–V diagram with this fiber's V marked. Its curves are computed here, when the card is drawn (after
- * the headline's first paint, see CalcScreen), not in the screen's own render.
+ * The b–V diagram with this fiber's V marked. Its curves are computed here, when the details band draws
+ * the card (after the headline, see CalcScreen), not in the screen's own render.
  */
 /**
  * The diagram's V range: 6, 9 or 12, the first that shows the fiber's V with a third to spare. A few fixed
