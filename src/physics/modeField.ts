@@ -52,11 +52,21 @@ export function lpFieldAt(mode: LPMode, rOverA: number): number {
 }
 
 function fieldUnchecked(l: number, u: number, w: number, rho: number): number {
-  if (rho <= 1) return besselJPairUnchecked(l, u * rho)[0] / besselJPairUnchecked(l, u)[0];
+  return radialFieldUnchecked(l, u, w)(rho);
+}
+
+/** F(ρ) of one mode at many radii: the Bessel values at the core boundary, shared by every radius, taken once. */
+function radialFieldUnchecked(l: number, u: number, w: number): (rho: number) => number {
+  const jAtCore = besselJPairUnchecked(l, u)[0];
   // The w → 0 limit of K_l(wρ)/K_l(w); for l ≥ 1 also below 1e-300, where K_l(w) ≈ (l−1)! 2^(l−1) w^−l overflows
   // (relative error of the limit ~w², nil) and a subnormal w gave NaN.
-  if (w === 0 || (l >= 1 && w < TINY_W)) return l === 0 ? 1 : Math.pow(rho, -l);
-  return Math.exp(besselKLogScaledUnchecked(l, w * rho) - besselKLogScaledUnchecked(l, w) - w * (rho - 1));
+  const wLimit = w === 0 || (l >= 1 && w < TINY_W);
+  const kLogAtCore = wLimit ? 0 : besselKLogScaledUnchecked(l, w);
+  return (rho) => {
+    if (rho <= 1) return besselJPairUnchecked(l, u * rho)[0] / jAtCore;
+    if (wLimit) return l === 0 ? 1 : Math.pow(rho, -l);
+    return Math.exp(besselKLogScaledUnchecked(l, w * rho) - kLogAtCore - w * (rho - 1));
+  };
 }
 
 /**
@@ -68,14 +78,25 @@ export function lpIntensityGrid(mode: LPMode, cells: number, extentOverA: number
   const { l, u, w } = requireMode(mode);
   const n = requireInteger('cells', cells, 2, 400);
   const extent = requirePositive('extentOverA', extentOverA, { max: 100 });
+  const field = radialFieldUnchecked(l, u, w);
+  // The samples sit symmetrically about both axes: column k and column n−1−k are the same distance from
+  // the axis, and so are rows. F(r) depends on that pair of distances alone, whichever is the row, so it is
+  // computed once per pair (about n²/8 Bessel evaluations, not n²); the angle still varies per sample.
+  const half = Math.ceil(n / 2);
+  const fromEdge = (k: number) => Math.min(k, n - 1 - k);
+  const fieldByDistances = new Float64Array(half * half).fill(Number.NaN);
   const values: number[] = new Array(n * n);
   let max = 0;
   for (let row = 0; row < n; row++) {
     const y = extent * (1 - (2 * (row + 0.5)) / n);
+    const dy = fromEdge(row);
     for (let col = 0; col < n; col++) {
       const x = extent * ((2 * (col + 0.5)) / n - 1);
-      const r = Math.hypot(x, y);
-      const amplitude = fieldUnchecked(l, u, w, r) * (l === 0 ? 1 : Math.cos(l * Math.atan2(y, x)));
+      const dx = fromEdge(col);
+      const slot = dx < dy ? dx * half + dy : dy * half + dx;
+      let f = fieldByDistances[slot]!;
+      if (Number.isNaN(f)) f = fieldByDistances[slot] = field(Math.hypot(x, y));
+      const amplitude = f * (l === 0 ? 1 : Math.cos(l * Math.atan2(y, x)));
       const intensity = amplitude * amplitude;
       values[row * n + col] = intensity;
       if (intensity > max) max = intensity;
@@ -94,12 +115,13 @@ export function lp01Field(v: number, opts: { samples?: number; rMaxOverA?: numbe
   const rMax = requirePositive('rMaxOverA', opts.rMaxOverA ?? 3, { max: FIELD_MAX_R_OVER_A });
   const { u, w } = solveLpMode(0, 1, v);
   const centre = besselJPairUnchecked(0, u)[0]; // E(0) = 1/J_0(u) relative to E(a) = 1
+  const fieldAt = radialFieldUnchecked(0, u, w);
   const rOverA: number[] = [];
   const field: number[] = [];
   for (let i = 0; i < samples; i++) {
     const rho = (rMax * i) / (samples - 1);
     rOverA.push(rho);
-    field.push(centre * fieldUnchecked(0, u, w, rho));
+    field.push(centre * fieldAt(rho));
   }
   return { rOverA, field };
 }
@@ -154,8 +176,9 @@ function sampleLp01(v: number): SampledField & { mode: LPMode } {
   const weight = new Float64Array(x.length);
   let power = 0;
   const centre = besselJPairUnchecked(0, u)[0];
+  const fieldAt = radialFieldUnchecked(0, u, w);
   for (let i = 0; i < x.length; i++) {
-    field[i] = centre * fieldUnchecked(0, u, w, x[i]);
+    field[i] = centre * fieldAt(x[i]);
     weight[i] = qw[i] * x[i];
     power += weight[i] * field[i] * field[i];
   }

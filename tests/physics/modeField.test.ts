@@ -178,6 +178,26 @@ describe('the LP intensity picture', () => {
     expect(at(9, 16)).toBeCloseTo(at(9, 3), 12); // mirror image
     expect(at(2, 9)).toBeLessThan(0.01 * at(9, 3)); // on the y axis: cos φ ≈ 0
   });
+  it('every sample is the single-point field lpFieldAt × cos(lφ), squared and scaled to a brightest of 1', async () => {
+    // The picture computes F(r) once per pair of distances from the axes; this checks that shortcut sample
+    // by sample against lpFieldAt (itself checked against SciPy above), on odd and even grids.
+    const { lpIntensityGrid } = await import('../../src/physics/modeField');
+    for (const [l, m, v, cells] of [[0, 1, 2.2, 21], [1, 1, 3.5, 20], [2, 1, 5.2, 17], [0, 2, 5.2, 24]] as const) {
+      const mode = solveLpMode(l, m, v);
+      const extent = 1.6;
+      const grid = lpIntensityGrid(mode, cells, extent);
+      const direct: number[] = [];
+      for (let row = 0; row < cells; row++) {
+        for (let col = 0; col < cells; col++) {
+          const x = extent * ((2 * col + 1) / cells - 1);
+          const y = extent * (1 - (2 * row + 1) / cells);
+          direct.push((lpFieldAt(mode, Math.hypot(x, y)) * Math.cos(l * Math.atan2(y, x))) ** 2);
+        }
+      }
+      const brightest = Math.max(...direct);
+      direct.forEach((d, i) => expect(grid[i], `LP${l}${m}, ${cells} cells, sample ${i}`).toBeCloseTo(d / brightest, 12));
+    }
+  });
   it('refuses a picture too fine for a phone', async () => {
     const { lpIntensityGrid } = await import('../../src/physics/modeField');
     expect(() => lpIntensityGrid(solveLpMode(0, 1, 2), 1000, 1.5)).toThrow(InputError);
