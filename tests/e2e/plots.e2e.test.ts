@@ -89,3 +89,62 @@ describe('plot text on every screen with a plot', () => {
     }, 240_000);
   }
 });
+
+describe('the mode picture on a phone', () => {
+  it('is a grey image the browser decodes, scaled smoothly, with the mode\'s shape: LP11 dark on the axis, bright in two lobes', async () => {
+    const context = await newContext(shared.browser, { viewport: PHONE });
+    try {
+      const page = await context.newPage();
+      await page.goto(`${shared.server.url}#/single-mode`);
+      await waitForScreen(page);
+      await settled(page);
+      const picture = await page.evaluate(async () => {
+        const image = document.querySelector<SVGImageElement>('main figure.mode-picture mask image');
+        if (!image) return undefined;
+        // Decoded by Chromium itself, then read back pixel by pixel.
+        const decoded = new Image();
+        decoded.src = image.href.baseVal;
+        await decoded.decode();
+        const canvas = document.createElement('canvas');
+        canvas.width = decoded.naturalWidth;
+        canvas.height = decoded.naturalHeight;
+        const ctx = canvas.getContext('2d')!;
+        ctx.drawImage(decoded, 0, 0);
+        const all = ctx.getImageData(0, 0, canvas.width, canvas.height).data;
+        const grey = (x: number, y: number) => all[4 * (y * canvas.width + x)];
+        const c = canvas.width / 2;
+        let brightest = 0;
+        for (let i = 0; i < all.length; i += 4) brightest = Math.max(brightest, all[i]);
+        return {
+          width: canvas.width,
+          height: canvas.height,
+          label: image.closest('svg')?.getAttribute('aria-label') ?? '',
+          onAxis: grey(c, c),
+          // 0.6 core radii left and right of the axis, and the same distance above it (the picture spans ±1.6 radii).
+          left: grey(Math.round(c - (0.6 / 1.6) * c), c),
+          right: grey(Math.round(c + (0.6 / 1.6) * c), c),
+          above: grey(c, Math.round(c - (0.6 / 1.6) * c)),
+          corner: grey(0, 0),
+          brightest,
+          rendering: getComputedStyle(image).imageRendering,
+        };
+      });
+      expect(picture, 'a mode picture on #/single-mode').toBeDefined();
+      const p = picture!;
+      expect([p.width, p.height]).toEqual([72, 72]);
+      // The default (G.652.D at 1310 nm, the model's V just above 2.405) shows LP11, the mode that decides.
+      expect(p.label).toContain('Intensity of LP11');
+      // LP11 ∝ J1(ur/a)² cos²φ (Gloge 1971): zero on the axis and along the y axis, two lobes on the x axis,
+      // and far down in the cladding at 1.6 core radii on the diagonal.
+      expect(p.brightest).toBe(255);
+      expect(p.left).toBeGreaterThan(150);
+      expect(p.right).toBeGreaterThan(150);
+      expect(p.onAxis).toBeLessThan(10);
+      expect(p.above).toBeLessThan(10);
+      expect(p.corner).toBeLessThan(40);
+      expect(p.rendering).toBe('auto'); // smooth scaling, not blocky cells
+    } finally {
+      await context.close();
+    }
+  }, 60_000);
+});

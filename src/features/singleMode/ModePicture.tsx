@@ -6,6 +6,7 @@
 import { useMemo } from 'preact/hooks';
 import { lpIntensityGrid, type LPMode } from '../../physics';
 import { lpName } from '../../ui/format';
+import { greyBmpDataUrl } from '../../ui/greyImage';
 
 export interface ModePictureProps {
   mode: LPMode;
@@ -19,38 +20,10 @@ const SIZE = 300;
 const PAD = { left: 58, bottom: 40, top: 10, right: 12 };
 const TICKS = [-1.5, -1, -0.5, 0, 0.5, 1, 1.5];
 
-/**
- * The grid as a PNG data URL: white where the mode is bright, black where dark (a luminance mask).
- * Undefined where the browser has no 2D canvas; the picture then falls back to one rectangle per cell.
- */
-function maskImage(grid: number[], cells: number): string | undefined {
-  if (typeof document === 'undefined') return undefined;
-  const canvas = document.createElement('canvas');
-  canvas.width = cells;
-  canvas.height = cells;
-  const ctx = canvas.getContext?.('2d');
-  if (!ctx) return undefined;
-  const image = ctx.createImageData(cells, cells);
-  for (let i = 0; i < grid.length; i++) {
-    const v = Math.round(Math.min(1, Math.max(0, grid[i]!)) * 255);
-    image.data[4 * i] = v;
-    image.data[4 * i + 1] = v;
-    image.data[4 * i + 2] = v;
-    image.data[4 * i + 3] = 255;
-  }
-  ctx.putImageData(image, 0, 0);
-  try {
-    return canvas.toDataURL('image/png');
-  } catch {
-    return undefined;
-  }
-}
-
 export function ModePicture({ mode, cells = 72, extentOverA = 1.6 }: ModePictureProps) {
   const grid = useMemo(() => lpIntensityGrid(mode, cells, extentOverA), [mode.l, mode.m, mode.u, mode.w, cells, extentOverA]);
-  const href = useMemo(() => maskImage(grid, cells), [grid, cells]);
+  const href = useMemo(() => greyBmpDataUrl({ levels: grid, width: cells, height: cells }), [grid, cells]);
   const inner = SIZE - PAD.left - PAD.right;
-  const cell = inner / cells;
   const toX = (xOverA: number) => PAD.left + ((xOverA + extentOverA) / (2 * extentOverA)) * inner;
   const toY = (yOverA: number) => PAD.top + ((extentOverA - yOverA) / (2 * extentOverA)) * inner;
   const name = lpName(mode.l, mode.m);
@@ -59,29 +32,10 @@ export function ModePicture({ mode, cells = 72, extentOverA = 1.6 }: ModePicture
   return (
     <figure class="plot mode-picture">
       <svg viewBox={`0 0 ${SIZE} ${SIZE}`} role="img" aria-label={`Intensity of ${name} across the fiber end: ${lobes}. Axes in core radii; the circle is the core boundary.`}>
-        {href ? (
-          <>
-            <mask id={maskId} maskUnits="userSpaceOnUse" x={PAD.left} y={PAD.top} width={inner} height={inner}>
-              <image href={href} x={PAD.left} y={PAD.top} width={inner} height={inner} preserveAspectRatio="none" style={{ imageRendering: 'auto' }} />
-            </mask>
-            <rect x={PAD.left} y={PAD.top} width={inner} height={inner} fill="currentColor" mask={`url(#${maskId})`} />
-          </>
-        ) : (
-          <g fill="currentColor">
-            {grid.map((value, i) =>
-              value < 0.01 ? null : (
-                <rect
-                  key={i}
-                  x={(PAD.left + (i % cells) * cell).toFixed(2)}
-                  y={(PAD.top + Math.floor(i / cells) * cell).toFixed(2)}
-                  width={(cell + 0.05).toFixed(2)}
-                  height={(cell + 0.05).toFixed(2)}
-                  fill-opacity={value.toFixed(2)}
-                />
-              ),
-            )}
-          </g>
-        )}
+        <mask id={maskId} maskUnits="userSpaceOnUse" x={PAD.left} y={PAD.top} width={inner} height={inner}>
+          <image href={href} x={PAD.left} y={PAD.top} width={inner} height={inner} preserveAspectRatio="none" style={{ imageRendering: 'auto' }} />
+        </mask>
+        <rect x={PAD.left} y={PAD.top} width={inner} height={inner} fill="currentColor" mask={`url(#${maskId})`} />
         <circle cx={toX(0)} cy={toY(0)} r={(inner / (2 * extentOverA)).toFixed(2)} class="plot-marker" fill="none" />
         <rect x={PAD.left} y={PAD.top} width={inner} height={inner} fill="none" class="plot-grid" />
         {TICKS.filter((t) => Math.abs(t) <= extentOverA).map((t) => (
