@@ -189,7 +189,9 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
 
   const selId = `${id}-source`;
   const open = openByHand ?? !resolved.fiber;
-  const element = (
+  // Made again only when what it shows changes: a key typed in another field of the screen re-renders the
+  // screen, and the picker's selects, options and summary would otherwise be compared anew on every key.
+  const element = useMemo(() => (
     <details
       class="fiber-picker"
       open={open}
@@ -275,7 +277,7 @@ export function useFiberPicker(opts: FiberPickerOptions): FiberPickerState {
       )}
       </div>
     </details>
-  );
+  ), [open, shortLabel, label, resolved, source, presets, saved, category, profile, cutoffKind, core.text, na.text, alpha.text, cutoff.text, mfd.text, mfdWl.text, allowsSingleMode, mmOnly, id]);
   return { fiber: resolved.fiber, error: resolved.error, element };
 }
 
