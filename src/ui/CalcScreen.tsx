@@ -9,6 +9,7 @@ import { useEffect, useLayoutEffect, useRef, useState } from 'preact/hooks';
 import { HowComputed, type HowComputedProps } from './HowComputed';
 import { ReportActions } from './ReportActions';
 import { rendersAlike } from './rendersAlike';
+import { sentences } from './sentences';
 import { CautionLine } from './SafetyNotice';
 import type { ReportSpec } from './copyText';
 
@@ -199,9 +200,9 @@ const TONE_MARK: Record<Tone, string> = { ok: '✓ ', warn: '! ', bad: '✗ ', i
  * under "More". Trainers open it; the installer reads the two.
  */
 export function ShortProse({ text }: { text: string }) {
-  const sentences = text.match(/[^.!?]+[.!?]+(?:\s+|$)|[^.!?]+$/g) ?? [text];
-  const head = sentences.slice(0, 2).join('').trim();
-  const rest = sentences.slice(2).join('').trim();
+  const all = sentences(text);
+  const head = all.slice(0, 2).join('').trim();
+  const rest = all.slice(2).join('').trim();
   return (
     <div class="prose note">
       <p>{head}</p>
