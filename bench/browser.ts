@@ -152,8 +152,10 @@ async function measureOfflineStart(): Promise<void> {
 }
 
 // Long tasks on the main thread while someone types into each calculator: heavy mode solving and
-// coupling must run in the worker, so typing never stalls. Every screen at CPU ÷4; BENCH_TYPING_SCREEN
-// names the screens to measure, comma-separated (one alone is also measured at CPU ÷1).
+// coupling must run in the worker, so typing never stalls. Every screen at CPU ÷4, typed TYPING_RUNS times on a
+// fresh page; the figure is the median of the runs' longest tasks, as for every other figure here.
+// BENCH_TYPING_SCREEN names the screens to measure, comma-separated (one alone is also measured at CPU ÷1);
+// BENCH_TYPING_RUNS sets the runs per screen.
 const LONG_TASK_GOAL_MS = 50;
 const TYPING_SCREENS = process.env.BENCH_TYPING_SCREEN ? process.env.BENCH_TYPING_SCREEN.split(',') : FEATURES.filter((f) => f.id !== 'library').map((f) => f.id);
 // Values a technician might try in turn, typed one key at a time at a brisk ~8 keys/s;
@@ -194,7 +196,17 @@ function longTaskProbe(): void {
   requestAnimationFrame(frame);
 }
 
-async function typeOnScreen(serverUrl: string, browser: Awaited<ReturnType<typeof launchBrowser>>, screen: string, slowdown: number): Promise<number | undefined> {
+interface TypingRun {
+  /** The longest task ≥ 50 ms while typing; 0 when none reached 50 ms (the Long Tasks API reports no shorter one). */
+  longestMs: number;
+  longTasks: number;
+  keys: number;
+  fields: number;
+  maxGapMs: number;
+  worstFrame?: { ms: number; what: string };
+}
+
+async function typeOnScreen(serverUrl: string, browser: Awaited<ReturnType<typeof launchBrowser>>, screen: string, slowdown: number): Promise<TypingRun | undefined> {
   const context = await newContext(browser);
   try {
     await context.addInitScript(longTaskProbe);
@@ -237,36 +249,58 @@ async function typeOnScreen(serverUrl: string, browser: Awaited<ReturnType<typeo
       w.__typing = false;
       return { longTasks: w.__longTasks, maxGap: w.__maxFrameGapMs, worstFrame: w.__worstFrame };
     });
-    const worst = longTasks.length ? Math.max(...longTasks) : 0;
-    printRow({
-      name: `typing on #/${screen}, longest main-thread task, CPU ÷${slowdown}`,
-      median: longTasks.length ? formatMs(worst) : '< 50 ms',
-      p90: '—',
-      runs: String(keys),
-      goal: `≤ ${LONG_TASK_GOAL_MS} ms`,
-      ratio: longTasks.length ? `${(worst / LONG_TASK_GOAL_MS).toFixed(2)}${worst > LONG_TASK_GOAL_MS ? ' over' : ''}` : '< 1',
-    });
-    console.log(`  (${keys} keys in ${n} fields; ${longTasks.length} task${longTasks.length === 1 ? '' : 's'} ≥ 50 ms; longest gap between frames ${formatMs(maxGap)})`);
-    if (longTasks.length && worstFrame) console.log(`  longest frame ${formatMs(worstFrame.ms)}: ${worstFrame.what}`);
-    return worst;
+    return { longestMs: longTasks.length ? Math.max(...longTasks) : 0, longTasks: longTasks.length, keys, fields: n, maxGapMs: maxGap, worstFrame };
   } finally {
     await context.close();
   }
 }
 
+/** Typing runs per screen: a run's longest task swings by ±30 ms on a 2-core machine shared with the browser's other processes. */
+const TYPING_RUNS = Number(process.env.BENCH_TYPING_RUNS ?? 3);
+
 async function measureTypingLongTasks(): Promise<void> {
   const server = await startServer(distDir!);
   const browser = await launchBrowser();
+  const ms = (v: number) => (v > 0 ? formatMs(v) : '< 50 ms');
   try {
-    const worst: { screen: string; ms: number }[] = [];
+    const byScreen: { screen: string; medianMs: number; worstMs: number }[] = [];
     for (const screen of TYPING_SCREENS) {
       for (const slowdown of TYPING_SCREENS.length === 1 ? [1, CPU_SLOWDOWN] : [CPU_SLOWDOWN]) {
-        const ms = await typeOnScreen(server.url, browser, screen, slowdown);
-        if (ms !== undefined && slowdown === CPU_SLOWDOWN) worst.push({ screen, ms });
+        const runs: TypingRun[] = [];
+        for (let i = 0; i < TYPING_RUNS; i++) {
+          const run = await typeOnScreen(server.url, browser, screen, slowdown);
+          if (run) runs.push(run);
+        }
+        if (runs.length === 0) continue;
+        // The figure is the median over runs of each run's longest task; p90 and the detail line show the worst run.
+        const longest = runs.map((r) => r.longestMs).sort((x, y) => x - y);
+        const median = quantile(longest, 0.5);
+        const worstRun = runs.reduce((a, b) => (b.longestMs > a.longestMs ? b : a));
+        printRow({
+          name: `typing on #/${screen}, longest main-thread task per run, CPU ÷${slowdown}`,
+          median: ms(median),
+          p90: ms(quantile(longest, 0.9)),
+          runs: String(runs.length),
+          goal: `≤ ${LONG_TASK_GOAL_MS} ms`,
+          ratio: median > 0 ? `${(median / LONG_TASK_GOAL_MS).toFixed(2)}${median > LONG_TASK_GOAL_MS ? ' over' : ''}` : '< 1',
+        });
+        console.log(
+          `  (${runs[0]!.keys} keys in ${runs[0]!.fields} fields a run; tasks ≥ 50 ms in each run: ${runs.map((r) => r.longTasks).join(', ')}; ` +
+            `longest per run: ${runs.map((r) => ms(r.longestMs)).join(', ')}; longest gap between frames ${formatMs(Math.max(...runs.map((r) => r.maxGapMs)))})`,
+        );
+        if (worstRun.longestMs > 0 && worstRun.worstFrame) console.log(`  longest frame ${formatMs(worstRun.worstFrame.ms)}: ${worstRun.worstFrame.what}`);
+        if (slowdown === CPU_SLOWDOWN) byScreen.push({ screen, medianMs: median, worstMs: longest.at(-1)! });
       }
     }
-    const top = worst.sort((a, b) => b.ms - a.ms)[0];
-    if (top) console.log(`typing, every screen at CPU ÷${CPU_SLOWDOWN}: longest task ${top.ms ? formatMs(top.ms) : 'under 50 ms'} (#/${top.screen}); goal ≤ ${LONG_TASK_GOAL_MS} ms`);
+    const top = [...byScreen].sort((a, b) => b.medianMs - a.medianMs)[0];
+    const worst = [...byScreen].sort((a, b) => b.worstMs - a.worstMs)[0];
+    if (top && worst) {
+      const over = byScreen.filter((b) => b.medianMs > LONG_TASK_GOAL_MS).length;
+      console.log(
+        `typing, every screen at CPU ÷${CPU_SLOWDOWN}, ${TYPING_RUNS} runs each: highest median ${ms(top.medianMs)} (#/${top.screen}); ` +
+          `${over} of ${byScreen.length} screens over the goal of ≤ ${LONG_TASK_GOAL_MS} ms; longest single task in any run ${ms(worst.worstMs)} (#/${worst.screen})`,
+      );
+    }
   } finally {
     await browser.close();
     await server.close();
