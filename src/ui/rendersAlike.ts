@@ -12,11 +12,18 @@ function isVNode(x: object): x is { type: unknown; key: unknown; ref: unknown; p
 }
 
 /**
+ * A function component marked `drawsFromPropsAlone = true` promises that calling it outside a render is safe and
+ * gives what it draws: no hooks, no context, nothing read but its props.
+ */
+type DrawsFromPropsAlone = ((props: unknown) => unknown) & { drawsFromPropsAlone?: boolean };
+
+/**
  * True when `a` and `b` render alike: the same vnode, or vnodes of the same type, key and ref whose props
  * are equal in depth (numbers by `Object.is`, so NaN equals NaN; arrays, typed arrays and plain objects by
  * their entries). Functions, maps, class instances and anything else count as alike only when they are the
- * very same object: a handler made anew may hold new state, so it is never assumed equal. A false answer
- * only costs a re-render; a true one must never hide a change.
+ * very same object: a handler made anew may hold new state, so it is never assumed equal (a component marked
+ * `drawsFromPropsAlone` is instead compared by what it draws). A false answer only costs a re-render; a true
+ * one must never hide a change.
  */
 export function rendersAlike(a: unknown, b: unknown, depth = 0): boolean {
   if (Object.is(a, b)) return true;
@@ -30,7 +37,12 @@ export function rendersAlike(a: unknown, b: unknown, depth = 0): boolean {
   }
   if (isVNode(a) || isVNode(b)) {
     if (!isVNode(a) || !isVNode(b)) return false;
-    return a.type === b.type && a.key === b.key && a.ref === b.ref && rendersAlike(a.props, b.props, depth + 1);
+    if (a.type !== b.type || a.key !== b.key || a.ref !== b.ref) return false;
+    if (rendersAlike(a.props, b.props, depth + 1)) return true;
+    // A component that draws from its props alone is compared by what it draws: a table's cell functions,
+    // made anew on every render of the screen, are then alike when they draw the same rows the same way.
+    const type = a.type as DrawsFromPropsAlone;
+    return typeof type === 'function' && type.drawsFromPropsAlone === true && rendersAlike(type(a.props), type(b.props), depth + 1);
   }
   const proto = Object.getPrototypeOf(a);
   if (proto !== Object.getPrototypeOf(b) || (proto !== Object.prototype && proto !== null)) return false;

@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { h } from 'preact';
 import { rendersAlike } from '../../src/ui/rendersAlike';
+import { DataTable } from '../../src/ui/DataTable';
 
 function Card(props: { title: string; children?: unknown }) {
   return h('section', null, props.title);
@@ -70,5 +71,41 @@ describe('every change reads as a change', () => {
     const deep = (n: number): unknown => (n === 0 ? 1 : [deep(n - 1)]);
     expect(rendersAlike(deep(500), deep(500))).toBe(false);
     expect(rendersAlike(deep(50), deep(50))).toBe(true);
+  });
+});
+
+describe('a table is compared by the cells it draws', () => {
+  // The screen makes its column functions anew on every key; the table must stay as drawn when the cells
+  // come out the same, and be redrawn when any cell, row key or row mark would come out different.
+  const rows = [
+    { wavelengthNm: 1310, lossDb: 0.35 },
+    { wavelengthNm: 1550, lossDb: 0.22 },
+  ];
+  const table = (decimals: number, data = rows, mark?: number) =>
+    h(DataTable<(typeof rows)[number]>, {
+      caption: 'Attenuation',
+      rows: data,
+      rowKey: (r) => r.wavelengthNm,
+      rowClass: (r) => (r.wavelengthNm === mark ? 'row-chosen' : undefined),
+      columns: [
+        { label: 'Wavelength', cell: (r) => `${r.wavelengthNm} nm`, num: true },
+        { label: 'Loss', cell: (r) => `${r.lossDb.toFixed(decimals)} dB/km`, num: true },
+      ],
+    });
+
+  it('new column functions that draw the same cells: alike', () => {
+    expect(rendersAlike(table(2), table(2))).toBe(true);
+    expect(rendersAlike(h('section', null, table(2)), h('section', null, table(2)))).toBe(true);
+  });
+
+  it('a function that now draws differently (it holds new state), a changed row, or a newly marked row: changed', () => {
+    expect(rendersAlike(table(2), table(3))).toBe(false);
+    expect(rendersAlike(table(2), table(2, [rows[0]!, { wavelengthNm: 1550, lossDb: 0.25 }]))).toBe(false);
+    expect(rendersAlike(table(2), table(2, rows, 1550))).toBe(false);
+  });
+
+  it('a component not marked as drawing from its props alone still counts new functions as a change', () => {
+    const Unmarked = (p: { cell: () => string }) => h('td', null, p.cell());
+    expect(rendersAlike(h(Unmarked, { cell: () => 'x' }), h(Unmarked, { cell: () => 'x' }))).toBe(false);
   });
 });

@@ -51,6 +51,9 @@ const USUAL_DATA_WAVELENGTHS_NM: readonly number[] = [850, 1300, 1310, 1550];
 /** Longest patch cord accepted, in km (the link budget refuses cords over 10,000 m). */
 const MAX_CORD_KM = 10;
 
+/** One function for the chart's values, not one per render: a new one would make the card draw again on every key. */
+const twoDecimals = (v: number) => formatFixed(v, 2);
+
 function fiberClassOf(f: ResolvedFiber): FiberClass {
   const kind = f.category ? findPreset(f.category)?.kind : undefined;
   if (kind) return kind;
@@ -407,7 +410,7 @@ export default function Screen() {
                 xLabel="Element"
                 yLabel="Loss (dB)"
                 bars={b.answers[0].budget.elements.map((e) => ({ label: e.label, value: e.maxDb }))}
-                formatValue={(v) => formatFixed(v, 2)}
+                formatValue={twoDecimals}
               />
             )}
           </div>

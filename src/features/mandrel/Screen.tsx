@@ -17,6 +17,8 @@ import type { MandrelTaskInput, MandrelTaskOutput } from '../encircledFlux/tasks
 import { ControlTable, EfPlot, efVerdictLine, efVerdictText, fiberSpec, templateSource } from '../encircledFlux/parts';
 
 const CORD_DIAMETERS_MM = [...new Set(MANDREL_TABLE.map((r) => r.cordDiameterMm))];
+/** One function for the chart's values, not one per render: a new one would make the card draw again on every key. */
+const twoDigits = (v: number) => formatNumber(v, 2);
 
 function groupRange(groups: GroupTransmission[], fate: GroupTransmission['fate']): string {
   const list = groups.filter((g) => g.fate === fate).map((g) => g.principal);
@@ -123,7 +125,7 @@ export default function Screen() {
             xLabel="Mode group (higher groups travel nearer the core edge)"
             yLabel="Power left (%)"
             bars={r.perGroup.map((g) => ({ label: String(g.principal), value: g.transmission * 100 }))}
-            formatValue={(v) => formatNumber(v, 2)}
+            formatValue={twoDigits}
           />
           <dl class="kv">
             <dt>Stripped (under 10 % left)</dt>
