@@ -260,16 +260,22 @@ const TYPING_RUNS = Number(process.env.BENCH_TYPING_RUNS ?? 3);
 
 async function measureTypingLongTasks(): Promise<void> {
   const server = await startServer(distDir!);
-  const browser = await launchBrowser();
   const ms = (v: number) => (v > 0 ? formatMs(v) : '< 50 ms');
   try {
     const byScreen: { screen: string; medianMs: number; worstMs: number }[] = [];
     for (const screen of TYPING_SCREENS) {
       for (const slowdown of TYPING_SCREENS.length === 1 ? [1, CPU_SLOWDOWN] : [CPU_SLOWDOWN]) {
         const runs: TypingRun[] = [];
-        for (let i = 0; i < TYPING_RUNS; i++) {
-          const run = await typeOnScreen(server.url, browser, screen, slowdown);
-          if (run) runs.push(run);
+        // A browser of its own for each screen, as a person opens the app: one browser kept through some sixty
+        // pages gave the screens typed last more and longer tasks than the same screens typed alone.
+        const browser = await launchBrowser();
+        try {
+          for (let i = 0; i < TYPING_RUNS; i++) {
+            const run = await typeOnScreen(server.url, browser, screen, slowdown);
+            if (run) runs.push(run);
+          }
+        } finally {
+          await browser.close();
         }
         if (runs.length === 0) continue;
         // The figure is the median over runs of each run's longest task; p90 and the detail line show the worst run.
@@ -279,7 +285,8 @@ async function measureTypingLongTasks(): Promise<void> {
         printRow({
           name: `typing on #/${screen}, longest main-thread task per run, CPU ÷${slowdown}`,
           median: ms(median),
-          p90: ms(quantile(longest, 0.9)),
+          // Nearest rank, not interpolated: a run under 50 ms has no figure to interpolate with (3 runs: the worst).
+          p90: ms(longest[Math.ceil(0.9 * longest.length) - 1]!),
           runs: String(runs.length),
           goal: `≤ ${LONG_TASK_GOAL_MS} ms`,
           ratio: median > 0 ? `${(median / LONG_TASK_GOAL_MS).toFixed(2)}${median > LONG_TASK_GOAL_MS ? ' over' : ''}` : '< 1',
@@ -302,7 +309,6 @@ async function measureTypingLongTasks(): Promise<void> {
       );
     }
   } finally {
-    await browser.close();
     await server.close();
   }
 }
