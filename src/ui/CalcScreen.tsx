@@ -85,7 +85,19 @@ function DetailsBand({ children }: { children: ComponentChildren }) {
   // Slots by position: `{r && <Card/>}` keeps its place as false while there is no result.
   const target: ComponentChildren[] = Array.isArray(children) ? children : [children];
   const [shown, setShown] = useState<ComponentChildren[]>([]);
-  const behind = target.length !== shown.length || target.some((c, i) => !rendersAlike(c, shown[i]));
+  // A card and what is shown in its slot are compared once: the band renders again after every step with the
+  // same cards, and the step compares them too. A deep compare of a big card's data, repeated, was the costliest
+  // script of a key on a table-heavy screen.
+  const compared = useRef(new WeakMap<object, { shown: ComponentChildren; alike: boolean }>());
+  const alike = (card: ComponentChildren, now: ComponentChildren): boolean => {
+    if (typeof card !== 'object' || card === null) return rendersAlike(card, now);
+    const last = compared.current.get(card);
+    if (last && last.shown === now) return last.alike;
+    const answer = rendersAlike(card, now);
+    compared.current.set(card, { shown: now, alike: answer });
+    return answer;
+  };
+  const behind = target.length !== shown.length || target.some((c, i) => !alike(c, shown[i]));
   // What a card cost to draw on the last step: from the step's start to its commit (layout effects run then).
   const cost = useRef({ startedMs: 0, cards: 0, msPerCard: Infinity });
 
@@ -106,7 +118,7 @@ function DetailsBand({ children }: { children: ComponentChildren }) {
         const cards = Math.max(1, Math.floor(STEP_BUDGET_MS / c.msPerCard));
         c.startedMs = performance.now();
         setShown((now) => {
-          const next = nextStep(now, target, cards);
+          const next = nextStep(now, target, alike, cards);
           c.cards = next.taken;
           return next.shown;
         });
@@ -130,11 +142,16 @@ function DetailsBand({ children }: { children: ComponentChildren }) {
  * cut to length once all match. A slot the screen made anew from the same data keeps its old vnode, which
  * Preact skips.
  */
-function nextStep(now: ComponentChildren[], target: ComponentChildren[], cards: number): { shown: ComponentChildren[]; taken: number } {
+function nextStep(
+  now: ComponentChildren[],
+  target: ComponentChildren[],
+  alike: (card: ComponentChildren, shown: ComponentChildren) => boolean,
+  cards: number,
+): { shown: ComponentChildren[]; taken: number } {
   const next = now.slice(0, target.length);
   let taken = 0;
   for (let i = 0; i < target.length && taken < cards; i++) {
-    if (rendersAlike(target[i], now[i])) continue;
+    if (alike(target[i], now[i])) continue;
     next[i] = target[i];
     taken++;
   }
