@@ -128,9 +128,10 @@ export function parseErrorText(q: QuantityState, label: string, unit: string, ex
   return sentence(label, `a number${unitWords}, ${example ?? EXAMPLES[q.kind]}`, q.failure.hint);
 }
 
+type NumberFieldViewProps = Omit<NumberFieldProps, 'calc'> & { fault: FieldFault | undefined };
+
 /** A field bound to one useQuantity state; its id is `f-<argument>`. */
-function NumberFieldView({ q, calc, example, keypad, ...rest }: NumberFieldProps) {
-  const fault = calc?.errorArgument === q.argument ? calc.fault : undefined;
+function NumberFieldView({ q, fault, example, keypad, ...rest }: NumberFieldViewProps) {
   const error = parseErrorText(q, rest.label, rest.unit, example) ?? (fault ? sentence(rest.label, fault.allowed, fault.hint) : undefined);
   return (
     <NumberInput
@@ -146,5 +147,13 @@ function NumberFieldView({ q, calc, example, keypad, ...rest }: NumberFieldProps
   );
 }
 
-/** A typed quantity's field. Skipped when the screen re-renders with the same props (a key in another field). */
-export const NumberField = memoAlike(NumberFieldView);
+const NumberFieldAlike = memoAlike(NumberFieldView);
+
+/**
+ * A typed quantity's field. Skipped when the screen re-renders with the same props (a key in another field).
+ * Of the computation it is given, only the fault that names this field goes on to be compared: the whole
+ * result, compared in depth for every field on every key, cost more than drawing the field.
+ */
+export function NumberField({ calc, ...props }: NumberFieldProps) {
+  return <NumberFieldAlike {...props} fault={calc?.errorArgument === props.q.argument ? calc.fault : undefined} />;
+}
