@@ -48,10 +48,6 @@ function requireMode(mode: unknown): LPMode {
 export function lpFieldAt(mode: LPMode, rOverA: number): number {
   const { l, u, w } = requireMode(mode);
   const rho = requireNumber('rOverA', rOverA, { min: 0, max: FIELD_MAX_R_OVER_A, hint: (x) => (x < 0 ? 'a radius is ≥ 0' : undefined) });
-  return fieldUnchecked(l, u, w, rho);
-}
-
-function fieldUnchecked(l: number, u: number, w: number, rho: number): number {
   return radialFieldUnchecked(l, u, w)(rho);
 }
 

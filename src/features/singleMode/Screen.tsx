@@ -178,12 +178,8 @@ export default function Screen() {
 }
 
 /**
- * The b–V diagram with this fiber's V marked. Its curves are computed here, when the details band draws
- * the card (after the headline, see CalcScreen), not in the screen's own render.
- */
-/**
  * The diagram's V range: 6, 9 or 12, the first that shows the fiber's V with a third to spare. A few fixed
- * ranges, each computed once per visit (`bvCurves`), so typing a wavelength key by key (1, 13, 131 nm give
+ * ranges, each computed once while the app is open (`bvCurves`), so typing a wavelength key by key (1, 13, 131 nm give
  * huge V) does not solve the curves again on every key.
  */
 function diagramVMax(v: number | undefined): number {
@@ -201,6 +197,10 @@ function bvCurves(vMax: number): { name: string; points: [number, number][] }[] 
   return curves;
 }
 
+/**
+ * The b–V diagram with this fiber's V marked. Its curves are computed here, when the details band draws
+ * the card (after the headline, see CalcScreen), not in the screen's own render.
+ */
 function BvDiagram({ r, stale }: { r: SingleModeCheck | undefined; stale: boolean }) {
   const vMax = diagramVMax(r?.v);
   const diagram = useResult(() => bvCurves(vMax), [vMax]);
